@@ -1,0 +1,9 @@
+import { defineConfig } from 'vitest/config';
+
+export default defineConfig({
+  test: {
+    include: ['test/**/*.test.ts'],
+    // Property tests are seeded (see test/seed.ts); a failure prints its seed and path.
+    testTimeout: 60_000,
+  },
+});
