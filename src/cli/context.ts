@@ -1,0 +1,20 @@
+import { WarningList } from '../common/errors.js';
+import type { CliIo } from './io.js';
+
+/** What every command receives: where to write, how, and where warnings go. */
+export interface CommandContext {
+  readonly io: CliIo;
+  /** --json: stdout carries one JSON document and nothing else. */
+  readonly json: boolean;
+  /** Warnings from the core, printed (or returned in JSON) by the runner, never by commands. */
+  readonly warnings: WarningList;
+}
+
+/**
+ * What a command hands back to the runner. The runner alone prints: `text` on stdout in normal
+ * mode, `json` (with a `warnings` array added) on stdout with --json.
+ */
+export interface CommandOutcome {
+  readonly text: string;
+  readonly json: Record<string, unknown>;
+}

@@ -1,0 +1,91 @@
+/**
+ * Puts the pieces of generated code together into the body of a factory
+ * `(V, S, F, n) => { evaluate(P, out), jacobian(P, out, J) }`:
+ *
+ *   slot locals (v0 = V[0], s0 = S[0], f0 = F[0])
+ *   bind-time code: hoisted constants into C, hoisted columns into H (one loop over the rows)
+ *   prepareJacobian(): columns only the Jacobian needs (ln of data bases), computed on first use
+ *   evaluate(P, out):     parameter locals, per-call code, one loop over the rows
+ *   jacobian(P, out, J):  the same with derivatives, J column-major (J[j*n + i])
+ *
+ * Every function re-declares the slots it reads as locals, so that the row loops read locals only.
+ */
+
+export interface SourceParts {
+  readonly vectors: number;
+  readonly scalars: number;
+  readonly params: number;
+  readonly functions: number;
+  readonly hoistedScalars: number;
+  readonly hoistedVectors: number;
+  readonly jacobianColumns: number;
+  readonly bindScalarLines: readonly string[];
+  readonly bindVectorLines: readonly string[];
+  readonly jacobianPrepLines: readonly string[];
+  readonly evaluatePre: readonly string[];
+  readonly evaluateLoop: readonly string[];
+  readonly evaluateRoot: string;
+  readonly jacobianPre: readonly string[];
+  readonly jacobianLoop: readonly string[];
+  /** Root value and its derivative per parameter (undefined: identically zero); absent for a true/false formula. */
+  readonly jacobianRoot: { readonly value: string; readonly tangents: readonly (string | undefined)[] } | undefined;
+  readonly boolean: boolean;
+}
+
+const range = (k: number, f: (i: number) => string) => Array.from({ length: k }, (_, i) => f(i));
+const decl = (items: string[]) => (items.length > 0 ? `const ${items.join(', ')};` : '');
+const loop = (lines: readonly string[]) => ['for (let i = 0; i < n; i++) {', ...lines.map((l) => `  ${l}`), '}'];
+
+/** The factory body as one string. */
+export function assembleSource(p: SourceParts): string {
+  const bound = [decl(range(p.hoistedScalars, (k) => `c${k} = C[${k}]`)), decl(range(p.hoistedVectors, (k) => `h${k} = H[${k}]`))];
+  const params = decl(range(p.params, (k) => `p${k} = P[${k}]`));
+  const store = (v: string) => (p.boolean ? `out[i] = ${v} ? 1 : 0;` : `out[i] = ${v};`);
+  const zeroColumns: string[] = [];
+  const jacobianStores: string[] = [];
+  if (p.jacobianRoot !== undefined) {
+    jacobianStores.push(store(p.jacobianRoot.value));
+    p.jacobianRoot.tangents.forEach((t, j) => {
+      if (t === undefined) zeroColumns.push(`J.fill(0, ${j} * n, ${j + 1} * n);`);
+      else jacobianStores.push(`J[${j} * n + i] = ${t};`);
+    });
+  }
+  return [
+    '"use strict";',
+    decl(range(p.vectors, (k) => `v${k} = V[${k}]`)),
+    decl(range(p.scalars, (k) => `s${k} = S[${k}]`)),
+    decl(range(p.functions, (k) => `f${k} = F[${k}]`)),
+    `const C = new Float64Array(${p.hoistedScalars});`,
+    'const H = [];',
+    'const G = [];',
+    'let jacobianReady = false;',
+    ...p.bindScalarLines,
+    ...range(p.hoistedVectors, (k) => `const h${k} = new Float64Array(n); H.push(h${k});`),
+    ...(p.hoistedVectors > 0 ? loop(p.bindVectorLines) : []),
+    'function prepareJacobian() {',
+    ...bound,
+    ...range(p.jacobianColumns, (k) => `const g${k} = new Float64Array(n); G.push(g${k});`),
+    ...(p.jacobianColumns > 0 ? loop(p.jacobianPrepLines) : []),
+    'jacobianReady = true;',
+    '}',
+    'function evaluate(P, out) {',
+    ...bound,
+    params,
+    ...p.evaluatePre,
+    ...loop([...p.evaluateLoop, store(p.evaluateRoot)]),
+    'return out;',
+    '}',
+    'function jacobian(P, out, J) {',
+    'if (!jacobianReady) prepareJacobian();',
+    ...bound,
+    decl(range(p.jacobianColumns, (k) => `g${k} = G[${k}]`)),
+    params,
+    ...p.jacobianPre,
+    ...zeroColumns,
+    ...(p.jacobianRoot === undefined ? [] : loop([...p.jacobianLoop, ...jacobianStores])),
+    '}',
+    'return { evaluate, jacobian };',
+  ]
+    .filter((l) => l !== '')
+    .join('\n');
+}

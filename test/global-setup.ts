@@ -1,0 +1,16 @@
+import { spawnSync } from 'node:child_process';
+import { fileURLToPath } from 'node:url';
+
+/**
+ * Builds dist/ once before the tests, so that the end-to-end tests run the real `similis`
+ * binary as a user would, from a fresh clone, with `npm test` alone. Type errors do not stop the
+ * build here (tsc still emits); `npm test` reports them in its type-check step.
+ */
+export default function setup(): void {
+  const root = fileURLToPath(new URL('..', import.meta.url));
+  const tsc = fileURLToPath(new URL('../node_modules/typescript/bin/tsc', import.meta.url));
+  const r = spawnSync(process.execPath, [tsc, '-p', 'tsconfig.build.json'], { cwd: root, encoding: 'utf8' });
+  if (r.status !== 0) {
+    process.stderr.write(`global-setup: the build reported errors (end-to-end tests may fail):\n${r.stdout}${r.stderr}\n`);
+  }
+}
