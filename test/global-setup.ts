@@ -13,4 +13,7 @@ export default function setup(): void {
   if (r.status !== 0) {
     process.stderr.write(`global-setup: the build reported errors (end-to-end tests may fail):\n${r.stdout}${r.stderr}\n`);
   }
+  // The second build step (as in `npm run build`): the help text printed by `similis --help`.
+  const h = spawnSync(process.execPath, ['scripts/write-help.mjs'], { cwd: root, encoding: 'utf8' });
+  if (h.status !== 0) process.stderr.write(`global-setup: scripts/write-help.mjs failed:\n${h.stderr}\n`);
 }

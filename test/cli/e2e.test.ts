@@ -1,4 +1,5 @@
 import { spawnSync } from 'node:child_process';
+import { existsSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 
@@ -16,6 +17,13 @@ describe('similis binary', () => {
     expect(r.code).toBe(0);
     expect(r.out).toMatch(/units\s/);
     expect(r.out).toMatch(/demo\s/);
+  });
+  it('--help from the build-time text equals the help commander renders (scripts/write-help.mjs)', () => {
+    expect(existsSync(fileURLToPath(new URL('../../dist/cli/help.txt', import.meta.url)))).toBe(true);
+    const fast = similis('--help');
+    const full = similis('help');
+    expect(full.code).toBe(0);
+    expect(fast.out).toBe(full.out);
   });
   it('--version prints the package version', () => {
     expect(similis('--version').out.trim()).toMatch(/^\d+\.\d+\.\d+$/);
