@@ -26,7 +26,7 @@ export type {
   UnaryNode,
   UnaryOp,
 } from './ast.js';
-export { childrenOf, nodeText, sameTree, SYNTHETIC_SPAN } from './ast.js';
+export { binaryNode, callNode, childrenOf, nameNode, nodeText, numNode, piNode, sameTree, SYNTHETIC_SPAN, unaryNode } from './ast.js';
 export { FORMULA_ERROR, type FormulaErrorKind } from './errors.js';
 export { FORMULA_LIMITS, parseFormula, type FormulaLimits, type ParseOptions } from './parser.js';
 export { tokenize, type Token, type TokenType } from './lexer.js';
