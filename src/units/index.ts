@@ -9,7 +9,7 @@
  * a WarningSink as data.
  */
 export { converter, toSI, type Converter } from './convert.js';
-export { Dimension, BASE_DIMENSIONS, type BaseDimension } from './dimension.js';
+export { Dimension, BASE_DIMENSIONS, BASE_DIMENSION_WORDS, type BaseDimension } from './dimension.js';
 export { knownUnits, type UnitInfo } from './info.js';
 export { parseUnit } from './parse.js';
 export { describeDimension, quantityNames } from './quantities.js';
