@@ -8,6 +8,7 @@
  *   - `similis --help` answers in under 150 ms median (startup).
  *   - a power law over 10^6 rows evaluated by the formula engine within 1.5x of a hand-written
  *     closure.
+ *   - `similis reduce` of a 1,000,000-row, 6-column CSV at >= 20 MB/s with < 500 MB peak memory.
  */
 import { spawnSync } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
@@ -136,7 +137,208 @@ async function benchFormula() {
   return { ratio };
 }
 
+/**
+ * Handbook correlations (src/correlations): Colebrook solved by Newton steps over a column of 10^6
+ * rows, against the explicit Haaland form on the same rows (the price of the implicit solve), a
+ * comparison of 10^5 data points, and 10^4 settling-velocity solves (scan + Brent).
+ */
+async function benchCorrelations() {
+  section('handbook correlations (median of 7 runs)');
+  const lib = await import('../dist/correlations/index.js');
+  const n = 1_000_000;
+  const re = new Float64Array(n);
+  for (let i = 0; i < n; i++) re[i] = 4e3 * Math.pow(2.5e4, (i % 1000) / 999);
+  const out = new Float64Array(n);
+  const time = (f, runs = 7) => {
+    const t = [];
+    for (let r = 0; r < runs; r++) {
+      const t0 = performance.now();
+      f();
+      t.push(performance.now() - t0);
+    }
+    return median(t);
+  };
+  const tCole = time(() => lib.evaluateCorrelation(lib.COLEBROOK, { Re: re, roughness: 1e-4 }, out));
+  const tHaal = time(() => lib.evaluateCorrelation(lib.HAALAND, { Re: re, roughness: 1e-4 }, out));
+  row('Colebrook, 10^6 rows (Newton to 1e-15)', `${tCole.toFixed(1)} ms`, `${(tCole / tHaal).toFixed(1)}x Haaland`);
+  row('Haaland (explicit), 10^6 rows', `${tHaal.toFixed(1)} ms`);
+  const m = 100_000;
+  const reSub = re.subarray(0, m);
+  const data = lib.evaluateCorrelation(lib.COLEBROOK, { Re: reSub, roughness: 1e-4 }).map((f, i) => f * (1 + 0.03 * Math.sin(i)));
+  const tCmp = time(() => lib.compareWithCorrelation({ response: data, inputs: { Re: reSub } }, lib.COLEBROOK, { roughness: 1e-4 }));
+  row('compareWithCorrelation, 10^5 points (colebrook)', `${tCmp.toFixed(1)} ms`);
+  const tSettle = time(() => {
+    for (let i = 0; i < 10_000; i++) {
+      lib.terminalVelocity({ diameterM: 1e-5 * (1 + (i % 997)), particleDensityKgM3: 2500, fluidDensityKgM3: 998.2, viscosityPaS: 1.0016e-3 }, lib.CLIFT_GAUVIN);
+    }
+  }, 3);
+  row('terminalVelocity (clift-gauvin), 10^4 solves', `${tSettle.toFixed(1)} ms`);
+  return { tCole, tHaal };
+}
+
+/**
+ * Fitting engine (src/fit). Targets from issue 4, medians: a 3-parameter power law
+ * f = C Re^a (L/D)^b fitted by nonlinear least squares in linear space on 10^5 and 10^6 points
+ * under 20 ms and 200 ms; a log-space fit of 10^6 points with 3 groups under 100 ms. Each is
+ * timed twice: the solver alone (Levenberg-Marquardt, or the log-space QR, with the covariance),
+ * and fitCorrelation with everything the report gets (per-point diagnostics, design checks, lack
+ * of fit). The same 10^5-point problem goes through ml-levenberg-marquardt (devDependency,
+ * comparison only) so that the gain stays visible. Data are deterministic (an LCG):
+ * f = 0.3164 Re^-0.25 (L/D)^0.05 [Pr^0.33] with +-2 % uniform noise, Re 1e3..1e5, L/D 10..200.
+ */
+async function benchFit() {
+  section('fitting engine: power laws, Levenberg-Marquardt and log space (medians)');
+  const fit = await import('../dist/fit/index.js');
+  const { parseFormula, compileFormula } = await import('../dist/expr/index.js');
+  const { WarningList } = await import('../dist/common/errors.js');
+  const { levenbergMarquardt: mlLevenbergMarquardt } = await import('ml-levenberg-marquardt');
+  const data = (n, withPr) => {
+    let s = 20261202;
+    const u = () => (s = (Math.imul(s, 1664525) + 1013904223) >>> 0) / 4294967296;
+    const c = { f: new Float64Array(n), Re: new Float64Array(n), LD: new Float64Array(n), Pr: new Float64Array(n) };
+    for (let i = 0; i < n; i++) {
+      c.Re[i] = 1e3 * 100 ** u();
+      c.LD[i] = 10 * 20 ** u();
+      c.Pr[i] = 0.7 * 10 ** u();
+      const pr = withPr ? c.Pr[i] ** 0.33 : 1;
+      c.f[i] = 0.3164 * c.Re[i] ** -0.25 * c.LD[i] ** 0.05 * pr * (1 + 0.02 * (2 * u() - 1));
+    }
+    return new Map(Object.entries(c));
+  };
+  const time = (fn, runs) => {
+    const t = [];
+    let last;
+    for (let r = 0; r < runs; r++) {
+      const t0 = performance.now();
+      last = fn();
+      t.push(performance.now() - t0);
+    }
+    return { ms: median(t), last };
+  };
+  const verdict = (ms, target) => `target < ${target} ms: ${ms < target ? 'met' : 'MISSED'}`;
+  const model = parseFormula('C*Re^a*LD^b');
+  const params = ['C', 'a', 'b'];
+  const start = [0.3, -0.3, 0];
+  const out = {};
+  for (const [n, runs, target] of [[100_000, 7, 20], [1_000_000, 5, 200]]) {
+    const columns = data(n, false);
+    const f = columns.get('f');
+    // Solver alone: LM on the compiled model (exponential form, as fitCorrelation compiles it), then the covariance.
+    const bound = compileFormula(fit.expForm(fit.detectPowerProduct(model, new Set(params))), { vectors: ['Re', 'LD'], scalars: [], params }).bind({ n, vectors: columns, scalars: {} });
+    const options = fit.resolveLmOptions({});
+    const solver = time(() => {
+      const o = fit.levenbergMarquardt(bound, f, undefined, start, options);
+      fit.analyseFactor(o.factor ?? fit.triangularFactor(o.jacobian, n, 3), 3, n);
+      return o;
+    }, runs);
+    row(`LM solver + covariance, 3 parameters, ${n.toExponential(0)} rows`, `${solver.ms.toFixed(1)} ms`, `${solver.last.iterations} iterations; ${verdict(solver.ms, target)}`);
+    const full = time(() => fit.fitCorrelation({ n, columns, response: 'f', model, parameters: new Map(params.map((p, j) => [p, start[j]])), method: 'nonlinear' }, new WarningList()), runs);
+    row(`fitCorrelation nonlinear (all diagnostics), ${n.toExponential(0)}`, `${full.ms.toFixed(1)} ms`, `${full.last.status.code}; ${verdict(full.ms, target)}`);
+    out[`nonlinear${n}`] = { solver: solver.ms, full: full.ms, rss: full.last.rss };
+  }
+  {
+    const n = 1_000_000;
+    const columns = data(n, true);
+    const model3 = parseFormula('C*Re^a*LD^b*Pr^c');
+    const parameters = new Map([['C', 1], ['a', 0], ['b', 0], ['c', 0]]);
+    const x = new Float64Array(n * 4);
+    const lnF = new Float64Array(n);
+    const solver = time(() => {
+      x.fill(1, 0, n);
+      const re = columns.get('Re'), ld = columns.get('LD'), pr = columns.get('Pr'), f = columns.get('f');
+      for (let i = 0; i < n; i++) {
+        x[n + i] = Math.log(re[i]);
+        x[2 * n + i] = Math.log(ld[i]);
+        x[3 * n + i] = Math.log(pr[i]);
+        lnF[i] = Math.log(f[i]);
+      }
+      return fit.linearLeastSquares(x, n, 4, lnF);
+    }, 5);
+    row('log-space solve (logs + QR + covariance), 10^6', `${solver.ms.toFixed(1)} ms`, verdict(solver.ms, 100));
+    const full = time(() => fit.fitCorrelation({ n, columns, response: 'f', model: model3, parameters, method: 'auto' }, new WarningList()), 5);
+    row('fitCorrelation log space, 3 groups, 10^6 rows', `${full.ms.toFixed(1)} ms`, `${full.last.method}; ${verdict(full.ms, 100)}`);
+    out.log = { solver: solver.ms, full: full.ms };
+  }
+  {
+    // ml-levenberg-marquardt 5.1.0 on the same 10^5-point problem, one run (it is slow), its defaults.
+    const n = 100_000;
+    const columns = data(n, false);
+    const re = columns.get('Re'), ld = columns.get('LD'), f = columns.get('f');
+    const xs = Array.from({ length: n }, (_, i) => i);
+    const fn = ([c, a, b]) => (i) => c * re[i] ** a * ld[i] ** b;
+    const ours = out[`nonlinear${n}`].rss;
+    const t0 = performance.now();
+    const r = mlLevenbergMarquardt({ x: xs, y: Array.from(f) }, fn, { initialValues: start });
+    const ms = performance.now() - t0;
+    const excess = r.parameterError / ours - 1;
+    row('ml-levenberg-marquardt 5.1.0, defaults, 10^5', `${ms.toFixed(0)} ms`, `${r.iterations} iterations, no status; RSS ${excess >= 0 ? '+' : ''}${excess.toExponential(1)} relative to ours`);
+    out.ml = ms;
+  }
+  return out;
+}
+
+/**
+ * `similis reduce` on a large rig file (issue 3): a generated 1,000,000-row, 6-column log (numbers
+ * as a rig logger writes them) reduced by the built CLI in a child process with a study of one
+ * derived quantity and three groups, written with -o. Reports input MB/s (wall time of the whole
+ * command, median of 3), rows per second, and the peak resident memory of the child
+ * (process.resourceUsage().maxRSS, read by an --import hook). Targets: >= 20 MB/s, < 500 MB.
+ */
+async function benchReduce() {
+  section('similis reduce: 1,000,000 rows x 6 columns (child process, median of 3)');
+  const { mkdtempSync, writeFileSync, rmSync, statSync, openSync, writeSync, closeSync } = await import('node:fs');
+  const { tmpdir } = await import('node:os');
+  const { join } = await import('node:path');
+  const { pathToFileURL } = await import('node:url');
+  const dir = mkdtempSync(join(tmpdir(), 'similis-bench-'));
+  try {
+    const csv = join(dir, 'loop-big.csv');
+    const fd = openSync(csv, 'w');
+    writeSync(fd, '# invented water-loop log for the bench\n# D = 0.5 in\n# L = 1.2 m\n# rho = 998.21 kg/m^3\nt [s],Q [L/min],dp [kPa],T [degC],p [kPa],mu [mPa*s]\n');
+    let text = '';
+    for (let i = 0; i < 1_000_000; i++) {
+      const q = 0.3 + (i % 1000) * 0.0147;
+      text += `${(i * 0.1).toFixed(1)},${q.toFixed(4)},${(0.0105 * q ** 1.75 + 0.001 * (i % 7)).toFixed(5)},${(20 + (i % 50) * 0.1).toFixed(2)},${(101.325 + (i % 13) * 0.01).toFixed(3)},${(1.0016 - (i % 50) * 0.00024).toFixed(5)}\n`;
+      if (text.length > 1 << 20) {
+        writeSync(fd, text);
+        text = '';
+      }
+    }
+    writeSync(fd, text);
+    closeSync(fd);
+    writeFileSync(join(dir, 'study.yaml'), 'derived:\n  U: 4*Q/(pi*D^2)\ngroups:\n  Re: rho*U*D/mu\n  f: dp*D/(L*0.5*rho*U^2)\n  LD: L/D\n');
+    const hook = join(dir, 'rss-hook.mjs');
+    writeFileSync(hook, "process.on('exit', () => { const u = process.resourceUsage(); process.stderr.write(`bench-rss-kb=${u.maxRSS} bench-cpu-us=${u.userCPUTime + u.systemCPUTime}\\n`); });\n");
+    const megabytes = statSync(csv).size / 1e6;
+    const runs = [];
+    for (let r = 0; r < 3; r++) {
+      const t0 = performance.now();
+      // Run in the folder, with relative names, as a user would (the file name is in every output row).
+      const out = spawnSync(process.execPath, ['--import', pathToFileURL(hook).href, cli, 'reduce', 'loop-big.csv', '--study', 'study.yaml', '-o', 'reduced.csv'], { cwd: dir, encoding: 'utf8' });
+      const ms = performance.now() - t0;
+      if (out.status !== 0) throw new Error(`similis reduce exited ${out.status}: ${out.stderr}`);
+      const rss = Number(/bench-rss-kb=(\d+)/.exec(out.stderr)?.[1] ?? NaN) / 1024;
+      const cpu = Number(/bench-cpu-us=(\d+)/.exec(out.stderr)?.[1] ?? NaN) / 1000;
+      runs.push({ ms, rss, cpu });
+    }
+    const wall = median(runs.map((x) => x.ms));
+    const cpu = median(runs.map((x) => x.cpu));
+    const rss = Math.max(...runs.map((x) => x.rss));
+    const rate = megabytes / (wall / 1000);
+    row(`input: ${megabytes.toFixed(1)} MB, output: ${(statSync(join(dir, 'reduced.csv')).size / 1e6).toFixed(1)} MB`, `${wall.toFixed(0)} ms`, `${(1e6 / (wall / 1000) / 1e6).toFixed(2)} M rows/s`);
+    row('throughput (input MB / wall time)', `${rate.toFixed(1)} MB/s`, rate >= 20 ? 'target >= 20 MB/s: met' : 'target >= 20 MB/s: MISSED');
+    row('CPU time of the child (user + system, all threads)', `${cpu.toFixed(0)} ms`);
+    row('peak resident memory of the child', `${rss.toFixed(0)} MB`, rss < 500 ? 'target < 500 MB: met' : 'target < 500 MB: MISSED');
+    return { rate, rss };
+  } finally {
+    rmSync(dir, { recursive: true, force: true });
+  }
+}
+
 process.stdout.write(`similis bench: node ${process.version}, ${cpus().length} cores (${cpus()[0]?.model ?? 'unknown cpu'})\n`);
 await benchStartup();
 await benchFormula();
+await benchCorrelations();
+await benchFit();
+await benchReduce();
 process.stdout.write('\n');

@@ -1,5 +1,8 @@
 import { Command, Option } from 'commander';
+import type { ReduceOptions } from './commands/reduce.js';
 import type { CommandContext, CommandOutcome } from './context.js';
+import type { GroupsCommandOptions } from './commands/groups.js';
+import { DEMO_HELP, GROUPS_HELP, HANDBOOK_HELP, MAIN_HELP, PROPS_HELP, REDUCE_HELP, UNITS_HELP } from './help-texts.js';
 
 /**
  * The command tree. Only names, options and help texts live here; each command's work is in
@@ -13,50 +16,6 @@ export const VERSION = '0.1.0';
 export type OutcomeSink = (outcome: CommandOutcome) => void;
 /** Makes the context once global options are known. */
 export type ContextFactory = (globals: { json: boolean; strict: boolean }) => CommandContext;
-
-const MAIN_HELP = `
-similis turns raw rig measurements into dimensionless groups and fitted correlations you can
-defend: units converted exactly, every formula dimension-checked, every excluded row explained.
-
-Pipeline:  CSV with units -> SI -> groups -> fit -> compare with handbook forms -> report
-Available now: unit conversion (units). Coming: reduce, fit, groups, handbook, batch, predict.
-
-Examples:
-  $ similis units 12.5 psi --to kPa
-  $ similis units "lb/ft^3"
-  $ similis units --list
-  $ similis demo
-
-Exit codes: 0 done; 1 done, with warnings treated as errors (--strict); 2 bad input (the message
-names file, line and column and what was expected); 3 internal fault (please report it).
-With --json, stdout carries exactly one JSON document; messages and warnings go to stderr.`;
-
-const UNITS_HELP = `
-Without --to, describes the unit: its factor to SI, its dimension over M L T Θ N I J, the
-quantity it measures, and whether the factor is exact (NIST SP 811 Appendix B, SI Brochure).
-
-Unit expressions: products (N*m, N.m, N·m, "N m"), quotients (kg/m^3; a/b/c is read left to
-right, with a warning), powers (m^2, m2, m², s^-1, m^(1/2)), parentheses (W/(m*K)), SI prefixes
-on SI units (kPa, mL, µm or um). A bare degC/degF is an absolute temperature; inside a compound
-unit (J/(kg*degC)) a temperature is a difference; write delta_degC or delta_degF for a bare
-difference. inH2O is the conventional inch of water (1000 kg/m^3, g_n: 249.08891 Pa);
-inH2O_4C (39.2 degF water, 249.082 Pa) and inH2O_60F (248.84 Pa) are the other two.
-
-Examples:
-  $ similis units 12.5 psi --to kPa          12.5 psi = 86.184466 kPa
-  $ similis units 68 degF --to degC          an absolute temperature: 20 degC
-  $ similis units 1 gpm --to "m^3/s"
-  $ similis units "lb/ft^3"                  factor to SI 16.018463 (kg m^-3), a density
-  $ similis units 3 "delta_degF" --to K      a temperature difference: 1.6666667 K
-  $ similis units --list                     every known unit with its definition and source
-  $ similis units 1 bar --to psi --json      {"value":1,"from":"bar","to":"psi","result":14.50377...}`;
-
-const DEMO_HELP = `
-Runs the furthest part of the pipeline that exists today on the small invented example in
-data-demo/ (see data-demo/README.md for the truth it was generated from), and says what it did.
-
-Example:
-  $ similis demo`;
 
 /**
  * Builds the commander program. `makeContext` is called once the global options are parsed;
@@ -91,6 +50,65 @@ export function buildProgram(makeContext: ContextFactory, onOutcome: OutcomeSink
     });
 
   program
+    .command('reduce')
+    .summary('rig CSV files to derived quantities and dimensionless groups, row by row')
+    .description('Reduce rig CSV files (units in the header) to derived quantities in SI and dimensionless groups.')
+    .argument('[files...]', 'rig CSV files or globs (runs/*.csv); default: the study file\'s data:')
+    .option('-s, --study <file>', 'the study file (YAML): constants, derived, groups, fit.where')
+    .option('-o, --output <file>', 'write the reduced CSV to this file (atomically) instead of stdout')
+    .option('-w, --where <condition>', 'keep only rows where the condition holds, e.g. "Re > 4000" (replaces fit.where)')
+    .option('-c, --const <name=value unit>', 'a constant, e.g. D="0.5 in" (repeatable)', collect)
+    .option('-d, --derive <name=formula>', 'a derived quantity, e.g. U="4*Q/(pi*D^2)" (repeatable)', collect)
+    .option('-g, --group <name=formula>', 'a dimensionless group, e.g. Re="rho*U*D/mu" (repeatable)', collect)
+    .option('--delimiter <char>', 'cell separator of the input: , ; or tab (default: detected from the header)')
+    .addHelpText('after', REDUCE_HELP)
+    .action(async (files: string[], opts: ReduceOptions, cmd: Command) => {
+      const { runReduce } = await import('./commands/reduce.js');
+      onOutcome(await runReduce(contextFor(cmd), files, opts));
+    });
+
+  program
+    .command('groups')
+    .summary('find the dimensionless groups of a problem and name them')
+    .description('Find the dimensionless groups of a set of variables (Buckingham Pi) and recognise the named ones.')
+    .argument('[data-files...]', 'rig CSV files: their columns with a unit and # constants are variables')
+    .option('--var <name=unit[:kind]>', 'a variable, e.g. dp=Pa or g=m/s^2:gravity (repeatable)', collect, [])
+    .option('--kind <name=kind>', 'the kind of a variable where its name does not decide, e.g. x=gravity (repeatable)', collect, [])
+    .option('-r, --response <name>', 'the measured result: never repeating, in one group only')
+    .option('--repeat <names>', 'the repeating variables, comma-separated, e.g. rho,U,D')
+    .option('-s, --study <file>', 'a study file: its constants and data files are variables, and its groups are checked')
+    .addHelpText('after', GROUPS_HELP)
+    .action(async (files: string[], opts: GroupsCommandOptions, cmd: Command) => {
+      const { runGroups } = await import('./commands/groups.js');
+      onOutcome(await runGroups(contextFor(cmd), files, opts));
+    });
+
+  program
+    .command('handbook')
+    .summary('list, show or evaluate the handbook correlations')
+    .description('List the handbook correlations, show one, evaluate one at given inputs, or solve a sphere settling velocity.')
+    .argument('[action]', 'list (default), show, eval or settle')
+    .argument('[args...]', 'show: ID; eval: ID name=value...; settle: ID diameter=... particleDensity=... fluidDensity=... viscosity=... [gravity=...]')
+    .option('--family <family>', 'list only one family: friction, drag or heat')
+    .addHelpText('after', HANDBOOK_HELP)
+    .action(async (action: string | undefined, args: string[], opts: { family?: string }, cmd: Command) => {
+      const { runHandbook } = await import('./commands/handbook.js');
+      onOutcome(runHandbook(contextFor(cmd), action, args, opts));
+    });
+
+  program
+    .command('props')
+    .summary('water or air properties at a temperature (and pressure), with sources')
+    .description('Print density, dynamic and kinematic viscosity of liquid water or dry air at a state.')
+    .argument('<fluid>', 'water or air')
+    .argument('<state...>', 'a temperature with its unit, then optionally an absolute pressure with its unit ("20 degC 101.325 kPa")')
+    .addHelpText('after', PROPS_HELP)
+    .action(async (fluid: string, state: string[], _opts: unknown, cmd: Command) => {
+      const { runProps } = await import('./commands/props.js');
+      onOutcome(runProps(contextFor(cmd), fluid, state));
+    });
+
+  program
     .command('demo')
     .summary('run the pipeline on the invented demo data')
     .description('Run what exists of the pipeline on the invented example in data-demo/ and explain each step.')
@@ -101,4 +119,9 @@ export function buildProgram(makeContext: ContextFactory, onOutcome: OutcomeSink
     });
 
   return program;
+}
+
+/** Commander collector for repeatable options. */
+function collect(value: string, previous: string[] | undefined): string[] {
+  return [...(previous ?? []), value];
 }

@@ -1,0 +1,134 @@
+/**
+ * The help texts of every command, in one place. Every example here is a real command line that
+ * works on the repository's demo data or describes a file the user has (no invented flags).
+ */
+
+export const MAIN_HELP = `
+similis turns raw rig measurements into dimensionless groups and fitted correlations you can
+defend: units converted exactly, every formula dimension-checked, every excluded row explained.
+
+Pipeline:  CSV with units -> SI -> groups -> fit -> compare with handbook forms -> report
+Commands: units (convert), reduce (rig files to groups), groups (Buckingham Pi), handbook
+(published correlations), props (water and air). Coming: fit, batch, predict.
+
+Examples:
+  $ similis units 12.5 psi --to kPa
+  $ similis units "lb/ft^3"
+  $ similis units --list
+  $ similis reduce data-demo/mini-loop/loop-a.csv --derive "U=4*Q/(pi*D^2)" --group "Re=rho*U*D/mu"
+  $ similis demo
+
+Exit codes: 0 done; 1 done, with warnings treated as errors (--strict); 2 bad input (the message
+names file, line and column and what was expected); 3 internal fault (please report it).
+With --json, stdout carries exactly one JSON document; messages and warnings go to stderr.`;
+
+export const UNITS_HELP = `
+Without --to, describes the unit: its factor to SI, its dimension over M L T Θ N I J, the
+quantity it measures, and whether the factor is exact (NIST SP 811 Appendix B, SI Brochure).
+
+Unit expressions: products (N*m, N.m, N·m, "N m"), quotients (kg/m^3; a/b/c is read left to
+right, with a warning), powers (m^2, m2, m², s^-1, m^(1/2)), parentheses (W/(m*K)), SI prefixes
+on SI units (kPa, mL, µm or um). A bare degC/degF is an absolute temperature; inside a compound
+unit (J/(kg*degC)) a temperature is a difference; write delta_degC or delta_degF for a bare
+difference. inH2O is the conventional inch of water (1000 kg/m^3, g_n: 249.08891 Pa);
+inH2O_4C (39.2 degF water, 249.082 Pa) and inH2O_60F (248.84 Pa) are the other two.
+
+Examples:
+  $ similis units 12.5 psi --to kPa          12.5 psi = 86.184466 kPa
+  $ similis units 68 degF --to degC          an absolute temperature: 20 degC
+  $ similis units 1 gpm --to "m^3/s"
+  $ similis units "lb/ft^3"                  factor to SI 16.018463 (kg m^-3), a density
+  $ similis units 3 "delta_degF" --to K      a temperature difference: 1.6666667 K
+  $ similis units --list                     every known unit with its definition and source
+  $ similis units 1 bar --to psi --json      {"value":1,"from":"bar","to":"psi","result":14.50377...}`;
+
+export const REDUCE_HELP = `
+Reads rig CSV files and computes, for every row, the study's derived quantities (in SI) and
+dimensionless groups. Every group is checked dimensionless against every file's header before any
+row is read; rows with a missing value, a non-finite result or a false where condition are left
+out and listed with file, line and reason. Output columns: file, line, then the derived
+quantities (U [m s^-1]) and groups in study order, in full double precision.
+
+Rig CSV file (comma, semicolon or tab; UTF-8, BOM and CRLF accepted):
+  # D = 0.5 in                       a constant of this file (number and unit)
+  # u(dp) = 0.5 % + 0.02 kPa         a standard uncertainty (kept for a later stage)
+  # any other line starting with #   a comment, kept
+  run,Q [L/min],dp [kPa]             header: name [unit], or a bare name (dimensionless or text)
+  R01,0.3,0.009432                   rows; empty, NA, NaN, N/A or - mark a missing value
+
+Study file (YAML):
+  title: Mini loop, tube A
+  data: [runs/*.csv]                 used when no files are named on the command line
+  constants: { rho: 998.21 kg/m^3, mu: 1.0016 mPa*s }
+  derived:   { U: 4*Q/(pi*D^2) }
+  groups:    { Re: rho*U*D/mu, f: dp*D/(L*0.5*rho*U^2), LD: L/D }
+  fit:       { where: Re > 4000 }     the row filter (--where replaces it)
+
+Examples:
+  $ similis reduce data-demo/mini-loop/loop-a.csv --derive "U=4*Q/(pi*D^2)" --group "Re=rho*U*D/mu"
+  $ similis reduce data-demo/mini-loop/loop-a.csv --derive "U=4*Q/(pi*D^2)" \
+      --group "Re=rho*U*D/mu" --group "f=dp*D/(L*0.5*rho*U^2)" --where "Re > 2000" --json
+  $ similis reduce runs/*.csv --study pipe-friction.yaml -o reduced.csv
+  $ similis reduce --study pipe-friction.yaml -o reduced.csv        files from the study's data:
+  $ similis reduce runs/*.csv --study pipe-friction.yaml --const D="12.7 mm"
+  $ similis reduce export.csv --delimiter ";" --study pipe-friction.yaml
+
+Without -o the CSV goes to stdout (and excluded rows to stderr, as warnings); with -o the file is
+written whole or not at all (a failed run leaves an existing file untouched). Files of more than
+a few MB show a progress line when stderr is a terminal.`;
+
+export const DEMO_HELP = `
+Runs the furthest part of the pipeline that exists today on the small invented example in
+data-demo/ (see data-demo/README.md for the truth it was generated from), and says what it did.
+
+Example:
+  $ similis demo`;
+
+export const PROPS_HELP = `
+Density, dynamic and kinematic viscosity of liquid water (IAPWS-IF97 region 1, IAPWS R12-08) or
+dry air (ideal gas, Sutherland's law), each with its published source and validity range. The
+pressure is absolute; without one, 101.325 kPa is used and the output says so. Outside a model's
+range the command stops with exit code 2 and names the range: it never extrapolates.
+
+Examples:
+  $ similis props water 20 degC                 998.2061 kg/m^3, 1.001597 mPa s, 1.003397 mm^2/s
+  $ similis props water 68 degF                 the same state
+  $ similis props water 120 degC 3 bar          pressurised liquid (at 1 atm it would boil: exit 2)
+  $ similis props air 20 degC 101.325 kPa       1.204105 kg/m^3, 18.13406 uPa s
+  $ similis props air -40 degF --json`;
+
+export const HANDBOOK_HELP = `
+Lists the handbook correlations (id, range of validity, source, form), shows one in full,
+evaluates one at given inputs, or solves the settling velocity of a sphere from a drag law.
+Friction factors are Darcy (f_D); each has an explicit Fanning twin '<id>-fanning' (f_F = f_D/4).
+Outside the range its source states, eval gives the value and an 'outside-range' warning.
+
+Examples:
+  $ similis handbook                                       every correlation, by family
+  $ similis handbook --family drag                         friction, drag or heat
+  $ similis handbook show swamee-jain                      equation, inputs, range and its source, accuracy
+  $ similis handbook eval colebrook Re=1e5 roughness=1e-4  f_D = 0.0185138660775
+  $ similis handbook eval blasius Re=5e5                   the value, and warning outside-range (Re <= 1e5)
+  $ similis handbook eval gnielinski Re=1e5 Pr=1.2         f_D optional: Filonenko smooth tube by default
+  $ similis handbook settle clift-gauvin diameter=1mm particleDensity=2500kg/m^3 fluidDensity=998.2kg/m^3 "viscosity=1.0016mPa*s"
+                                                           terminal velocity 0.145737 m/s
+  $ similis handbook eval colebrook Re=1e5 roughness=1e-4 --json`;
+
+export const GROUPS_HELP = `
+List the variables that matter; groups finds how many independent dimensionless groups they form
+(Buckingham Pi: n variables minus the rank of the dimensional matrix, in exact fractions), picks a
+set, and names the groups of the trade among them, up to a power and a numeric factor (a Reynolds
+number written with a volume flow is pi/4 times the pipe Reynolds number, and it says so). The
+groups print as formulas ready for a study file's groups:. With --study, it also checks the
+study's groups: dimensionless, independent, and covering every variable the data vary.
+
+Kinds: where two quantities share a dimension (a gravity and another acceleration; kinematic
+viscosity and diffusivity) the name decides (rho*, mu*, nu*, g, sigma, ...) or a hint: NAME=UNIT:kind.
+
+Examples:
+  $ similis groups --var dp=Pa --var rho=kg/m^3 --var "mu=Pa*s" --var D=m --var L=m --var U=m/s --response dp
+  $ similis groups --var dp=kPa --var rho=kg/m^3 --var mu=cP --var D=in --var L=m --var Q=L/min --response dp
+  $ similis groups --var Vt=m/s --var d=mm --var rho=kg/m^3 --var rho_p=kg/m^3 --var "mu=mPa*s" --var g=m/s^2
+  $ similis groups --var U=m/s --var L=m --var x=m/s^2:gravity
+  $ similis groups data-demo/mini-loop/loop-a.csv --response dp
+  $ similis groups --var dp=Pa --var rho=kg/m^3 --var "mu=Pa*s" --var D=m --var U=m/s --repeat rho,U,D --json`;
