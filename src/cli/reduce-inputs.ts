@@ -3,7 +3,9 @@ import { stat } from 'node:fs/promises';
 import { dirname, isAbsolute, relative, resolve } from 'node:path';
 import { glob } from 'tinyglobby';
 import { InputError } from '../common/errors.js';
-import type { Located } from '../data/index.js';
+import { readRigTable, type Delimiter, type Located } from '../data/index.js';
+import { reduceTable, type ReducedFile, type ReductionPlan } from '../reduce/index.js';
+import type { CommandContext } from './context.js';
 import type { CliIo } from './io.js';
 
 /**
@@ -115,4 +117,21 @@ export function progressLine(io: CliIo, file: InputFile, counter: { bytes: numbe
       if (shown) io.stderr('\r' + ' '.repeat(file.label.length + 40) + '\r');
     },
   };
+}
+
+/** Streams one rig file, with a progress line when it is long, and reduces it with its plan. */
+export async function reduceFile(ctx: CommandContext, f: InputFile, plan: ReductionPlan, delimiter: Delimiter | undefined): Promise<ReducedFile> {
+  const counter = { bytes: 0 };
+  const progress = progressLine(ctx.io, f, counter);
+  try {
+    const table = await readRigTable(fileChunks(f.path, counter), {
+      file: f.label,
+      ...(delimiter === undefined ? {} : { delimiter }),
+      sink: ctx.warnings,
+      ...(progress.onProgress === undefined ? {} : { onProgress: progress.onProgress }),
+    });
+    return reduceTable(table, plan);
+  } finally {
+    progress.done();
+  }
 }

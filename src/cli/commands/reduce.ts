@@ -1,34 +1,21 @@
-import { readFile, stat } from 'node:fs/promises';
 import { resolve } from 'node:path';
 import { InputError } from '../../common/errors.js';
-import {
-  applyStudyFlags,
-  DATA_ERROR,
-  emptyStudy,
-  loadStudy,
-  readRigHead,
-  readRigTable,
-  STUDY_MAX_BYTES,
-  whereFlag,
-  type Delimiter,
-  type Study,
-} from '../../data/index.js';
+import { readRigHead, whereFlag } from '../../data/index.js';
 import {
   commonOutputs,
   csvHeader,
   csvRows,
   jsonRows,
   planReduction,
-  reduceTable,
-  REDUCE_ERROR,
-  reduceMessages,
   type ExcludedRow,
   type OutputColumn,
-  type ReducedFile,
   type ReductionPlan,
 } from '../../reduce/index.js';
+import type { Study } from '../../data/index.js';
 import type { CommandContext, CommandOutcome } from '../context.js';
-import { fileChunks, progressLine, resolveInputs, type InputFile } from '../reduce-inputs.js';
+import { warnExclusions } from '../exclusions.js';
+import { fileChunks, reduceFile, resolveInputs, type InputFile } from '../reduce-inputs.js';
+import { delimiterOption, studyFor, type StudyOptions } from '../study-input.js';
 import { AtomicFile } from '../write-atomic.js';
 
 /**
@@ -39,18 +26,10 @@ import { AtomicFile } from '../write-atomic.js';
  * then each file is streamed, reduced and written. The output file is written atomically.
  */
 
-export interface ReduceOptions {
-  readonly study?: string;
+export interface ReduceOptions extends StudyOptions {
   readonly output?: string;
   readonly where?: string;
-  readonly const?: readonly string[];
-  readonly derive?: readonly string[];
-  readonly group?: readonly string[];
-  readonly delimiter?: string;
 }
-
-/** Excluded rows listed per file in a warning, before "and N more". */
-const LISTED_PER_WARNING = 5;
 
 /**
  * Runs `similis reduce`: returns the CSV (stdout), a summary (with -o) or the JSON document.
@@ -106,84 +85,12 @@ interface FileSummary {
   readonly excluded: number;
 }
 
-async function reduceFile(ctx: CommandContext, f: InputFile, plan: ReductionPlan, delimiter: Delimiter | undefined): Promise<ReducedFile> {
-  const counter = { bytes: 0 };
-  const progress = progressLine(ctx.io, f, counter);
-  try {
-    const table = await readRigTable(fileChunks(f.path, counter), {
-      file: f.label,
-      ...(delimiter === undefined ? {} : { delimiter }),
-      sink: ctx.warnings,
-      ...(progress.onProgress === undefined ? {} : { onProgress: progress.onProgress }),
-    });
-    return reduceTable(table, plan);
-  } finally {
-    progress.done();
-  }
-}
-
-async function studyFor(ctx: CommandContext, opts: ReduceOptions): Promise<{ study: Study; studyPath: string | null }> {
-  let study = emptyStudy();
-  let studyPath: string | null = null;
-  if (opts.study !== undefined) {
-    studyPath = resolve(ctx.io.cwd, opts.study);
-    const s = await stat(studyPath).catch(() => undefined);
-    if (s === undefined || !s.isFile()) throw new InputError('file-not-found', `no such study file: ${opts.study}`, { file: opts.study });
-    if (s.size > STUDY_MAX_BYTES) {
-      throw new InputError(DATA_ERROR.studyLimits, `the study file is ${s.size} bytes long; the limit is ${STUDY_MAX_BYTES}`, { file: opts.study });
-    }
-    study = loadStudy(await readFile(studyPath, 'utf8'), opts.study, ctx.warnings);
-  }
-  study = applyStudyFlags(study, { constants: opts.const ?? [], derive: opts.derive ?? [], group: opts.group ?? [] }, ctx.warnings);
-  if (study.derived.length === 0 && study.groups.length === 0) {
-    throw new InputError(REDUCE_ERROR.nothing, reduceMessages.nothing(), { file: opts.study ?? 'command line' });
-  }
-  return { study, studyPath };
-}
-
-function delimiterOption(text: string | undefined): Delimiter | undefined {
-  if (text === undefined) return undefined;
-  const d = { ',': ',', comma: ',', ';': ';', semicolon: ';', tab: '\t', '\t': '\t', '\\t': '\t' }[text.toLowerCase()];
-  if (d === undefined) {
-    throw new InputError(DATA_ERROR.delimiter, `--delimiter ${text}: expected , (comma), ; (semicolon) or tab`, { file: 'command line' });
-  }
-  return d as Delimiter;
-}
-
 function checkOutputPath(outputPath: string, label: string, files: readonly InputFile[], studyPath: string | null): void {
   const clash = files.find((f) => f.path === outputPath);
   if (clash !== undefined || outputPath === studyPath) {
     const what = clash !== undefined ? `the input file ${clash.label}` : 'the study file';
     throw new InputError('output-is-input', `-o ${label} is ${what}: similis never writes over its inputs; choose another output name`, { file: label });
   }
-}
-
-function warnExclusions(ctx: CommandContext, reduced: ReducedFile): void {
-  for (const [code, causes] of [
-    ['rows-excluded', ['missing', 'non-finite']],
-    ['rows-filtered', ['where']],
-  ] as const) {
-    const rows = reduced.excluded.filter((r) => (causes as readonly string[]).includes(r.cause));
-    if (rows.length === 0) continue;
-    const what = code === 'rows-excluded' ? 'excluded' : 'left out';
-    ctx.warnings.warn({ code, message: `${rows.length} row${rows.length === 1 ? '' : 's'} ${what}: ${listByReason(rows)}`, where: { file: reduced.file } });
-  }
-}
-
-/** 'where: Re > 4000 is false (lines 8, 9, 10); missing value in column dp ('NA') (line 17)', shortened. */
-function listByReason(rows: readonly ExcludedRow[]): string {
-  const byReason = new Map<string, number[]>();
-  for (const r of rows) {
-    const lines = byReason.get(r.reason);
-    if (lines === undefined) byReason.set(r.reason, [r.line]);
-    else lines.push(r.line);
-  }
-  const parts = [...byReason].slice(0, LISTED_PER_WARNING).map(([reason, lines]) => {
-    const shown = lines.slice(0, 10).join(', ') + (lines.length > 10 ? ` and ${lines.length - 10} more` : '');
-    return `${reason} (line${lines.length === 1 ? '' : 's'} ${shown})`;
-  });
-  const more = byReason.size > LISTED_PER_WARNING ? `; ${byReason.size - LISTED_PER_WARNING} more reasons (--json lists every row)` : '';
-  return parts.join('; ') + more;
 }
 
 interface OutcomeParts {
