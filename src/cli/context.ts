@@ -8,6 +8,8 @@ export interface CommandContext {
   readonly json: boolean;
   /** Warnings from the core, printed (or returned in JSON) by the runner, never by commands. */
   readonly warnings: WarningList;
+  /** The command line after the program name, as given (for provenance in reports). */
+  readonly argv: readonly string[];
 }
 
 /**

@@ -8,14 +8,16 @@ similis turns raw rig measurements into dimensionless groups and fitted correlat
 defend: units converted exactly, every formula dimension-checked, every excluded row explained.
 
 Pipeline:  CSV with units -> SI -> groups -> fit -> compare with handbook forms -> report
-Commands: units (convert), reduce (rig files to groups), groups (Buckingham Pi), handbook
-(published correlations), props (water and air). Coming: fit, batch, predict.
+Commands: units (convert), reduce (rig files to groups), fit (correlation, intervals, report),
+groups (Buckingham Pi), handbook (published correlations), props (water and air).
+Coming: batch, predict.
 
 Examples:
   $ similis units 12.5 psi --to kPa
   $ similis units "lb/ft^3"
   $ similis units --list
   $ similis reduce data-demo/mini-loop/loop-a.csv --derive "U=4*Q/(pi*D^2)" --group "Re=rho*U*D/mu"
+  $ similis fit --study data-demo/mini-loop/study.yaml --out reports/mini-loop
   $ similis demo
 
 Exit codes: 0 done; 1 done, with warnings treated as errors (--strict); 2 bad input (the message
@@ -132,3 +134,32 @@ Examples:
   $ similis groups --var U=m/s --var L=m --var x=m/s^2:gravity
   $ similis groups data-demo/mini-loop/loop-a.csv --response dp
   $ similis groups --var dp=Pa --var rho=kg/m^3 --var "mu=Pa*s" --var D=m --var U=m/s --repeat rho,U,D --json`;
+
+export const FIT_HELP = `
+Reads and reduces the rig files exactly as reduce does, pools the rows of every file, and fits the
+study's correlation: a power product of groups (C*Re^a*LD^b) by linear least squares on the
+logarithms, anything else by nonlinear least squares (Levenberg-Marquardt with exact derivatives).
+Prints the parameters with 95 % intervals, the goodness of fit, the range of the data (the only
+range where the correlation holds), the handbook comparison and the points to look at. With --out
+it writes NAME.json (every number), NAME.csv (every point, with file and line) and NAME.html (the
+report for a reviewer: plots, tables, cautions), all three or none.
+
+The study's fit section:
+  fit:
+    response: f                       a group (or derived quantity) of the study
+    model: C*Re^a*LD^b                any formula in groups and parameters
+    parameters: { C: 0.3, a: -0.25, b: 0 }   start values
+    method: auto                      auto | log-linear | nonlinear
+    where: Re > 4000                  the rows to fit (--where replaces it)
+    robust: none                      none | huber | bisquare (down-weights outliers, and says which)
+  compare: [blasius, {colebrook: {roughness: eps_D}}]   handbook forms (similis handbook lists them)
+
+Examples:
+  $ similis fit data-demo/mini-loop/loop-a.csv --study data-demo/mini-loop/study.yaml
+  $ similis fit --study data-demo/mini-loop/study.yaml --out reports/mini-loop
+  $ similis fit --study data-demo/mini-loop/study.yaml --method nonlinear --json
+  $ similis fit --study data-demo/mini-loop/study.yaml --model "C*Re^a" --param C=0.3 --param a=-0.25
+  $ similis fit runs/*.csv --study pipe-friction.yaml --where "Re > 4000 and LD >= 20" --robust huber
+
+A fitted correlation holds only inside the range of its data; sizing of piping or pressure
+equipment follows the applicable codes and a qualified engineer's judgement.`;

@@ -1,8 +1,9 @@
 import { Command, Option } from 'commander';
 import type { ReduceOptions } from './commands/reduce.js';
 import type { CommandContext, CommandOutcome } from './context.js';
+import type { FitCommandOptions } from './commands/fit.js';
 import type { GroupsCommandOptions } from './commands/groups.js';
-import { DEMO_HELP, GROUPS_HELP, HANDBOOK_HELP, MAIN_HELP, PROPS_HELP, REDUCE_HELP, UNITS_HELP } from './help-texts.js';
+import { DEMO_HELP, FIT_HELP, GROUPS_HELP, HANDBOOK_HELP, MAIN_HELP, PROPS_HELP, REDUCE_HELP, UNITS_HELP } from './help-texts.js';
 
 /**
  * The command tree. Only names, options and help texts live here; each command's work is in
@@ -65,6 +66,31 @@ export function buildProgram(makeContext: ContextFactory, onOutcome: OutcomeSink
     .action(async (files: string[], opts: ReduceOptions, cmd: Command) => {
       const { runReduce } = await import('./commands/reduce.js');
       onOutcome(await runReduce(contextFor(cmd), files, opts));
+    });
+
+  program
+    .command('fit')
+    .summary('fit a correlation to the reduced groups, with intervals, diagnostics and a report')
+    .description('Reduce rig files with a study and fit its correlation; compare with handbook forms; write a report.')
+    .argument('[files...]', "rig CSV files or globs; default: the study file's data:")
+    .option('-s, --study <file>', 'the study file (YAML): constants, derived, groups, fit, compare')
+    .option('-o, --out <reports/NAME>', 'write NAME.json, NAME.csv and NAME.html (atomically, all or none)')
+    .option('-w, --where <condition>', 'fit only rows where the condition holds (replaces fit.where)')
+    .option('--response <name>', 'the group to fit (replaces fit.response)')
+    .option('--model <formula>', 'the model, e.g. "C*Re^a*LD^b" (replaces fit.model)')
+    .option('--param <name=start>', 'a parameter and its start value (repeatable)', collect)
+    .option('--method <method>', 'auto, log-linear or nonlinear (replaces fit.method)')
+    .option('--robust <method>', 'none, huber or bisquare (replaces fit.robust)')
+    .option('--compare <id>', 'also compare with this handbook correlation (repeatable)', collect)
+    .option('--parity-band <fraction>', 'half-width of the parity plot band, e.g. 0.1 or 10% (default 10%)')
+    .option('-c, --const <name=value unit>', 'a constant, e.g. D="0.5 in" (repeatable)', collect)
+    .option('-d, --derive <name=formula>', 'a derived quantity (repeatable)', collect)
+    .option('-g, --group <name=formula>', 'a dimensionless group (repeatable)', collect)
+    .option('--delimiter <char>', 'cell separator of the input: , ; or tab (default: detected)')
+    .addHelpText('after', FIT_HELP)
+    .action(async (files: string[], opts: FitCommandOptions, cmd: Command) => {
+      const { runFit } = await import('./commands/fit.js');
+      onOutcome(await runFit(contextFor(cmd), files, opts));
     });
 
   program

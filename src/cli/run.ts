@@ -21,7 +21,7 @@ export async function runCli(argv: readonly string[], io: CliIo): Promise<ExitCo
   const program = buildProgram(
     (g) => {
       strict = g.strict;
-      context = { io, json: g.json, warnings: new WarningList() };
+      context = { io, json: g.json, warnings: new WarningList(), argv };
       return context;
     },
     (o) => {

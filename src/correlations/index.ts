@@ -61,3 +61,4 @@ export {
 } from './drag.js';
 export { DITTUS_BOELTER, DITTUS_BOELTER_COOLING, GNIELINSKI, SIEDER_TATE } from './heat.js';
 export { MESSAGES as CORRELATION_MESSAGES } from './messages.js';
+export { compareRequests, runComparisons, type FittedExponent, type StudyComparisonData } from './study-compare.js';

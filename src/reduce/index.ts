@@ -17,5 +17,6 @@ export { checkFitNames, checkStudyUncertainties } from './plan-checks.js';
 export { groupAdvice } from './advice.js';
 export { explainNonFinite } from './diagnose.js';
 export { reduceTable, type ExcludedRow, type ExclusionCause, type ReducedFile } from './reduce.js';
+export { poolReduced, type PooledTable } from './pool.js';
 export { commonOutputs, csvHeader, jsonRows } from './output.js';
 export { csvCell, csvRows } from './csv-text.js';

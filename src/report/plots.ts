@@ -53,10 +53,12 @@ interface PointRow {
 }
 
 function pointLayer(rows: readonly PointRow[], xTitle: string, yTitle: string, logX: boolean, logY: boolean): object {
+  // Few points: larger and darker; many: smaller and lighter so that density shows.
+  // size = pi r^2 with r = 3.5 or 2.5 px, so that the SVG path prints short numbers.
+  const few = rows.length <= 500;
   return {
     data: { values: rows },
-    // size = pi r^2 with r = 2.5 px, so that the SVG path prints short numbers.
-    mark: { type: 'point', filled: true, size: 19.635, aria: true },
+    mark: { type: 'point', filled: true, size: few ? 38.485 : 19.635, aria: true },
     encoding: {
       x: { field: 'x', type: 'quantitative', title: xTitle, scale: logX ? LOG_SCALE : { zero: false } },
       y: { field: 'y', type: 'quantitative', title: yTitle, scale: logY ? LOG_SCALE : { zero: false } },
@@ -66,8 +68,8 @@ function pointLayer(rows: readonly PointRow[], xTitle: string, yTitle: string, l
         title: null,
         scale: { domain: ['data', 'flagged'], range: ['circle', 'diamond'] },
       },
-      color: { field: 'flagged', type: 'nominal', title: null, scale: { domain: ['data', 'flagged'], range: ['#777777', '#000000'] } },
-      fillOpacity: { condition: { test: "datum.flagged === 'flagged'", value: 0 }, value: 0.6 },
+      color: { field: 'flagged', type: 'nominal', title: null, scale: { domain: ['data', 'flagged'], range: [few ? '#444444' : '#777777', '#000000'] } },
+      fillOpacity: { condition: { test: "datum.flagged === 'flagged'", value: 0 }, value: few ? 0.85 : 0.5 },
       strokeWidth: { value: 1 },
       description: { field: 'source' },
     },

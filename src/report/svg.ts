@@ -59,7 +59,7 @@ export const BASE_CONFIG = {
   background: 'white',
   view: { stroke: '#444' },
   axis: { labelFontSize: 11, titleFontSize: 12, titleFontWeight: 'normal', gridColor: '#e4e4e4', domainColor: '#444', tickColor: '#444' },
-  legend: { labelFontSize: 11, titleFontSize: 11, titleFontWeight: 'normal', orient: 'bottom' },
+  legend: { labelFontSize: 11, titleFontSize: 11, titleFontWeight: 'normal', orient: 'bottom', labelLimit: 320 },
   title: { fontSize: 13, fontWeight: 'bold', anchor: 'start' },
 } as const;
 

@@ -17,7 +17,7 @@ import { handleFailure } from '../../src/cli/run.js';
 const PIPE = ['dp=Pa', 'rho=kg/m^3', 'mu=Pa*s', 'D=m', 'L=m', 'U=m/s'];
 
 function context(json = false): CommandContext & { io: ReturnType<typeof memoryIo> } {
-  return { io: memoryIo(), json, warnings: new WarningList() };
+  return { io: memoryIo(), json, warnings: new WarningList(), argv: [] };
 }
 
 async function run(opts: GroupsCommandOptions, files: string[] = [], json = false) {

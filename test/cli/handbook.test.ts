@@ -11,7 +11,7 @@ import { renderInputError } from '../../src/cli/render.js';
  */
 
 function context(json = false): CommandContext {
-  return { io: memoryIo(), json, warnings: new WarningList() };
+  return { io: memoryIo(), json, warnings: new WarningList(), argv: [] };
 }
 
 function failure(f: () => unknown): InputError {

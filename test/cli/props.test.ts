@@ -6,7 +6,7 @@ import { EXIT, memoryIo } from '../../src/cli/io.js';
 import { handleFailure } from '../../src/cli/run.js';
 
 function context(json = false): CommandContext & { io: ReturnType<typeof memoryIo> } {
-  return { io: memoryIo(), json, warnings: new WarningList() };
+  return { io: memoryIo(), json, warnings: new WarningList(), argv: [] };
 }
 
 interface PropsJson {
