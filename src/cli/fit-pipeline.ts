@@ -1,0 +1,258 @@
+import { createHash } from 'node:crypto';
+import { mkdir, readFile } from 'node:fs/promises';
+import { dirname, resolve } from 'node:path';
+import { arch, platform } from 'node:os';
+import type { WarningSink } from '../common/errors.js';
+import { InputError, type Warning } from '../common/errors.js';
+import { compareRequests, runComparisons, type CompareRequest, type Comparison } from '../correlations/index.js';
+import { readRigHead, type Delimiter, type LocatedFormula, type Study } from '../data/index.js';
+import { fitCorrelation, fitResultToJson, POINT_FLAG, type FitInput, type FitResult } from '../fit/index.js';
+import { fitInputFromStudy, type FitOverrides } from '../fit/from-study.js';
+import { commonOutputs, planReduction, poolReduced, type PooledTable, type ReducedFile } from '../reduce/index.js';
+import { buildReportModel } from '../report/build-model.js';
+import { renderReportHtml, type ReportComparison } from '../report/index.js';
+import type { CommandContext } from './context.js';
+import { warnExclusions } from './exclusions.js';
+import { VERSION } from './program.js';
+import { fileChunks, reduceFile, type InputFile } from './reduce-inputs.js';
+import { jsonReplacer } from './run.js';
+import { AtomicFile } from './write-atomic.js';
+
+/**
+ * The steps of a fit, shared by `similis fit` (all files pooled) and `similis batch` (each file on
+ * its own, and pooled): reduce the files, fit the study's correlation, compare it with the handbook
+ * forms, and render NAME.json, NAME.csv and NAME.html as text, committed together or not at all.
+ */
+
+/** Reads every file's head against the study (before any row), then streams and reduces each file. */
+export async function reduceInputs(
+  ctx: CommandContext,
+  files: readonly InputFile[],
+  study: Study,
+  where: LocatedFormula | undefined,
+  delimiter: Delimiter | undefined,
+): Promise<{ reduced: ReducedFile[]; pooled: PooledTable }> {
+  const plans = [];
+  for (const f of files) {
+    const head = await readRigHead(fileChunks(f.path), { file: f.label, ...(delimiter === undefined ? {} : { delimiter }), sink: ctx.warnings });
+    plans.push(planReduction(study, head, where === undefined ? {} : { where }, ctx.warnings));
+  }
+  const outputs = commonOutputs(plans);
+  const reduced: ReducedFile[] = [];
+  for (const [k, f] of files.entries()) {
+    const r = await reduceFile(ctx, f, plans[k]!, delimiter);
+    warnExclusions(ctx, r);
+    reduced.push(r);
+  }
+  return { reduced, pooled: poolReduced(reduced, outputs) };
+}
+
+/** Everything one fit produced. */
+export interface FitRun {
+  readonly study: Study;
+  readonly pooled: PooledTable;
+  readonly input: FitInput;
+  readonly fit: FitResult;
+  readonly requests: readonly { request: CompareRequest; where: Warning['where'] }[];
+  readonly comparisons: readonly Comparison[];
+  /** The groups the model uses (predictors), in study order. */
+  readonly groups: readonly string[];
+}
+
+/** Fits the study's correlation to pooled rows and compares it with the requested handbook forms. */
+export function fitPooled(study: Study, pooled: PooledTable, overrides: FitOverrides, extraCompare: readonly string[], sink: WarningSink): FitRun {
+  const requests = compareRequests(study.compare, extraCompare);
+  const input = fitInputFromStudy(study.fit, overrides, pooled);
+  const fit = fitCorrelation(input, sink);
+  const constants = new Map(study.constants.map((c) => [c.name, c.valueSI]));
+  const exponents = fit.parameters
+    .filter((p) => p.role === 'exponent' && p.group !== undefined)
+    .map((p) => ({ name: p.group!, estimate: p.estimate, interval: p.ci95 }));
+  const comparisons = runComparisons(requests, { response: fit.points.y, columns: pooled.columns, constants, fitted: fit.points.fitted }, exponents, sink);
+  const groups = pooled.outputs.filter((o) => o.role === 'group' && o.name !== input.response && usedBy(fit.model, o.name)).map((o) => o.name);
+  return { study, pooled, input, fit, requests, comparisons, groups };
+}
+
+/** Whether a name appears in the model text as a whole word. */
+function usedBy(model: string, name: string): boolean {
+  return new RegExp(`(^|[^\\p{L}\\p{Nd}_])${name.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}($|[^\\p{L}\\p{Nd}_])`, 'u').test(model);
+}
+
+/** The JSON contract of `similis fit` (see README): fit, ranges, points, excluded, comparisons. */
+export function fitJson(run: FitRun): Record<string, unknown> {
+  const { fit, pooled, comparisons, groups } = run;
+  const { points, ranges, ...rest } = fitResultToJson(fit, pooled.rowSource) as { points: unknown[]; ranges: unknown } & Record<string, unknown>;
+  const status = fit.status.converged ? 'converged' : fit.status.code;
+  return {
+    fit: { ...rest, status, statusDetail: fit.status },
+    groups,
+    ranges,
+    points,
+    excluded: pooled.excluded.map((e) => ({ file: e.file, line: e.line, reason: e.reason })),
+    files: pooled.files,
+    comparisons: comparisons.map((c) => ({
+      id: c.id,
+      title: c.title,
+      n: c.n,
+      counted: c.counted,
+      meanDeviation: c.meanDeviation,
+      meanAbsDeviation: c.meanAbsDeviation,
+      rmsDeviation: c.rmsDeviation,
+      maxAbsDeviation: c.maxAbsDeviation,
+      within5: c.within5,
+      within10: c.within10,
+      within20: c.within20,
+      outOfRange: c.outOfRange,
+      notEvaluable: c.notEvaluable,
+      medianRatio: c.medianRatio,
+      fitDeviation: c.fitDeviation,
+    })),
+  };
+}
+
+/** What the report says about where the fit came from. */
+export interface ReportMeta {
+  readonly files: readonly InputFile[];
+  readonly studyText: { readonly name: string; readonly text: string } | null;
+  readonly title: string;
+  readonly parityBand: number;
+  readonly argv: readonly string[];
+  readonly warnings: readonly Warning[];
+}
+
+/** The three output texts of a fit: every number (JSON), every point (CSV), the report (HTML). */
+export async function renderFitFiles(run: FitRun, meta: ReportMeta): Promise<{ json: string; csv: string; html: string }> {
+  const hashes = await Promise.all(meta.files.map(async (f) => createHash('sha256').update(await readFile(f.path)).digest('hex')));
+  const model = buildReportModel({
+    title: meta.title,
+    fit: run.fit,
+    columns: run.pooled.columns,
+    rowSource: run.pooled.rowSource,
+    groups: run.groups,
+    excluded: run.pooled.excluded,
+    warnings: meta.warnings,
+    comparisons: run.comparisons.map((c, i) => reportComparison(c, run.requests[i]!.request.correlation.source)),
+    handbookCurves: (grid, held) => handbookCurves(run, grid, held),
+    parityBand: meta.parityBand,
+    files: meta.files.map((f, i) => {
+      const stats = run.pooled.files.find((p) => p.file === f.label);
+      return { name: f.label, sha256: hashes[i]!, rows: stats?.rowsRead ?? 0, used: stats?.rowsKept ?? 0 };
+    }),
+    study: meta.studyText,
+    tool: `similis ${VERSION}`,
+    date: new Date().toISOString().replace(/\.\d+Z$/, 'Z'),
+    platform: `${platform()} ${arch()}, Node ${process.version}`,
+    command: ['similis', ...meta.argv].map((a) => (/^[\w./=:-]+$/.test(a) ? a : JSON.stringify(a))).join(' '),
+  });
+  const json = JSON.stringify({ ...fitJson(run), warnings: meta.warnings.map((w) => ({ code: w.code, message: w.message })) }, jsonReplacer, 2) + '\n';
+  return { json, csv: pointsCsv(run), html: await renderReportHtml(model) };
+}
+
+/**
+ * The base path of NAME.json/.csv/.html and its label for messages.
+ * @throws {InputError} 'output-is-input' when an output would overwrite an input file.
+ */
+export function outputBase(cwd: string, out: string, files: readonly InputFile[]): { base: string; label: string } {
+  const base = resolve(cwd, out.replace(/\.(json|csv|html)$/i, ''));
+  for (const f of files) {
+    if ([`${base}.json`, `${base}.csv`, `${base}.html`].includes(f.path)) {
+      throw new InputError('output-is-input', `--out ${out} would overwrite the input file ${f.label}: choose another name`, { file: out });
+    }
+  }
+  return { base, label: out.replace(/\.(json|csv|html)$/i, '') };
+}
+
+/** Writes every target to a temporary file first, then renames them all: all or none. */
+export async function commitTogether(targets: readonly { path: string; label: string; text: string }[]): Promise<void> {
+  const files: AtomicFile[] = [];
+  try {
+    for (const t of targets) {
+      await mkdir(dirname(t.path), { recursive: true });
+      const f = await AtomicFile.create(t.path, t.label);
+      files.push(f);
+      await f.write(t.text);
+    }
+    for (const f of files) await f.commit();
+  } catch (e) {
+    for (const f of files) await f.abort().catch(() => undefined);
+    throw e;
+  }
+}
+
+function reportComparison(c: Comparison, source: string): ReportComparison {
+  return {
+    id: c.id,
+    label: c.title,
+    source,
+    meanDeviation: c.meanDeviation,
+    meanAbsDeviation: c.meanAbsDeviation,
+    rmsDeviation: c.rmsDeviation,
+    maxAbsDeviation: c.maxAbsDeviation,
+    within10: c.within10 / 100,
+    outOfRange: c.outOfRange,
+  };
+}
+
+/** The requested handbook forms along the main group, other inputs at their held (median) values. */
+function handbookCurves(run: FitRun, grid: Float64Array, held: ReadonlyMap<string, number>): { label: string; y: Float64Array }[] {
+  const curves: { label: string; y: Float64Array }[] = [];
+  for (const { request: r } of run.requests) {
+    const c = r.correlation;
+    const mainName = run.groups.find((name) => !held.has(name));
+    const y = new Float64Array(grid.length);
+    for (let i = 0; i < grid.length; i++) {
+      const x = c.inputs.map((input) => {
+        const arg = r.args.get(input.name);
+        if (typeof arg === 'number') return arg;
+        const name = typeof arg === 'string' ? arg : input.name;
+        if (name === mainName) return grid[i]!;
+        return held.get(name) ?? medianOf(run.pooled.columns.get(name));
+      });
+      y[i] = c.value(x);
+    }
+    if (y.some(Number.isFinite)) curves.push({ label: c.title, y });
+  }
+  return curves;
+}
+
+function medianOf(values: Float64Array | undefined): number {
+  if (values === undefined) return NaN;
+  const v = [...values].filter(Number.isFinite).sort((a, b) => a - b);
+  const m = v.length >> 1;
+  return v.length === 0 ? NaN : v.length % 2 ? v[m]! : (v[m - 1]! + v[m]!) / 2;
+}
+
+/** One row per point: file, line, the groups, response, fitted value, residuals, flags. */
+function pointsCsv(run: FitRun): string {
+  const { fit, pooled, groups } = run;
+  const head = ['file', 'line', ...groups, fit.response, 'fitted', 'residual', 'relative_deviation', 'studentized', 'leverage', 'cooks_distance', 'flags'];
+  const lines = [head.join(',')];
+  const p = fit.points;
+  const cols = groups.map((g) => pooled.columns.get(g)!);
+  for (let i = 0; i < pooled.n; i++) {
+    const file = pooled.rowSource.file[pooled.rowSource.fileIndex[i]!]!;
+    const flags = flagNames(p.flags[i]!);
+    lines.push(
+      [csvText(file), pooled.rowSource.line[i], ...cols.map((c) => c[i]), p.y[i], p.fitted[i], p.residual[i], p.relativeDeviation[i], p.studentized[i], p.leverage[i], p.cooksDistance[i], csvText(flags)].join(','),
+    );
+  }
+  return lines.join('\n') + '\n';
+}
+
+/** Short flag names for the CSV (the JSON and the report carry the worded reasons). */
+const FLAG_NAMES: readonly [number, string][] = [
+  [POINT_FLAG.outlier, 'outlier'],
+  [POINT_FLAG.leverage, 'high-leverage'],
+  [POINT_FLAG.influential, 'influential'],
+  [POINT_FLAG.downWeighted, 'down-weighted'],
+];
+
+function flagNames(bits: number): string {
+  return FLAG_NAMES.filter(([bit]) => (bits & bit) !== 0)
+    .map(([, name]) => name)
+    .join('; ');
+}
+
+function csvText(s: string): string {
+  return /[",\n\r]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
+}
