@@ -16,6 +16,7 @@ import { warnExclusions } from './exclusions.js';
 import { VERSION } from './program.js';
 import { fileChunks, reduceFile, type InputFile } from './reduce-inputs.js';
 import { jsonReplacer } from './run.js';
+import { vegaRuntime } from './vega-runtime.js';
 import { AtomicFile } from './write-atomic.js';
 
 /**
@@ -118,6 +119,8 @@ export interface ReportMeta {
   readonly parityBand: number;
   readonly argv: readonly string[];
   readonly warnings: readonly Warning[];
+  /** Inline the vega runtime for pan, zoom and tooltips (about +0.5 MB). */
+  readonly interactive?: boolean;
 }
 
 /** The three output texts of a fit: every number (JSON), every point (CSV), the report (HTML). */
@@ -145,7 +148,8 @@ export async function renderFitFiles(run: FitRun, meta: ReportMeta): Promise<{ j
     command: ['similis', ...meta.argv].map((a) => (/^[\w./=:-]+$/.test(a) ? a : JSON.stringify(a))).join(' '),
   });
   const json = JSON.stringify({ ...fitJson(run), warnings: meta.warnings.map((w) => ({ code: w.code, message: w.message })) }, jsonReplacer, 2) + '\n';
-  return { json, csv: pointsCsv(run), html: await renderReportHtml(model) };
+  const options = meta.interactive === true ? { interactiveRuntime: await vegaRuntime() } : {};
+  return { json, csv: pointsCsv(run), html: await renderReportHtml(model, options) };
 }
 
 /**

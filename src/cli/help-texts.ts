@@ -157,6 +157,7 @@ The study's fit section:
 Examples:
   $ similis fit data-demo/mini-loop/loop-a.csv --study data-demo/mini-loop/study.yaml
   $ similis fit --study data-demo/mini-loop/study.yaml --out reports/mini-loop
+  $ similis fit --study data-demo/mini-loop/study.yaml --out reports/mini-loop --interactive
   $ similis fit --study data-demo/mini-loop/study.yaml --method nonlinear --json
   $ similis fit --study data-demo/mini-loop/study.yaml --model "C*Re^a" --param C=0.3 --param a=-0.25
   $ similis fit runs/*.csv --study pipe-friction.yaml --where "Re > 4000 and LD >= 20" --robust huber

@@ -83,6 +83,7 @@ export function buildProgram(makeContext: ContextFactory, onOutcome: OutcomeSink
     .option('--robust <method>', 'none, huber or bisquare (replaces fit.robust)')
     .option('--compare <id>', 'also compare with this handbook correlation (repeatable)', collect)
     .option('--parity-band <fraction>', 'half-width of the parity plot band, e.g. 0.1 or 10% (default 10%)')
+    .option('--interactive', 'also inline the plotting runtime in NAME.html for pan, zoom and tooltips (about +0.5 MB)')
     .option('-c, --const <name=value unit>', 'a constant, e.g. D="0.5 in" (repeatable)', collect)
     .option('-d, --derive <name=formula>', 'a derived quantity (repeatable)', collect)
     .option('-g, --group <name=formula>', 'a dimensionless group (repeatable)', collect)

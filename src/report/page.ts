@@ -64,8 +64,13 @@ ${join(rows, '\n')}
 </tbody></table>`;
 }
 
+/** Extra scripts of an interactive page (see interactive.ts); the static page has none. */
+export interface PageScripts {
+  readonly html: string;
+}
+
 /** Builds the page. `plots` are the rendered plots in reading order (main, parity, residuals...). */
-export function renderPage(model: ReportModel, plots: readonly RenderedPlot[]): string {
+export function renderPage(model: ReportModel, plots: readonly RenderedPlot[], scripts?: PageScripts): string {
   const byId = new Map(plots.map((p) => [p.plot.id, p]));
   const plot = (id: string): Html => {
     const r = byId.get(id);
@@ -159,7 +164,7 @@ ${table(
   return `<!DOCTYPE html>
 ${html`<html lang="en"><head><meta charset="utf-8">
 <meta name="viewport" content="width=device-width, initial-scale=1">
-<meta http-equiv="Content-Security-Policy" content="default-src 'none'; style-src 'unsafe-inline'; img-src data:">
+<meta http-equiv="Content-Security-Policy" content="default-src 'none'; style-src 'unsafe-inline'; img-src data:${scripts === undefined ? '' : "; script-src 'unsafe-inline'"}">
 <title>${model.title}</title>
 <style>${new Html(PAGE_CSS)}</style></head>
 <body><main>
@@ -167,6 +172,6 @@ ${html`<html lang="en"><head><meta charset="utf-8">
 <p class="verdict verdict-${model.verdict.level}"><strong>Verdict:</strong> ${model.verdict.text}</p></header>
 <aside class="cautions" aria-label="Before you use this"><h2>Before you use this</h2><ul>${model.cautions.map((c) => html`<li>${c}</li>`)}</ul></aside>
 ${sections}
-</main></body></html>
+</main>${scripts === undefined ? '' : new Html(scripts.html)}</body></html>
 `.value}`;
 }

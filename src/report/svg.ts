@@ -64,11 +64,11 @@ export const BASE_CONFIG = {
 } as const;
 
 /**
- * Renders one vega-lite spec to SVG text.
- * @throws {Error} when vega-lite or vega rejects the spec (an internal fault: specs are ours).
+ * Compiles one of our vega-lite specs to a vega spec (with the shared config).
+ * @throws {Error} when vega-lite warns about the spec (an internal fault: specs are ours).
  */
-export async function renderSvg(spec: TopLevelSpec): Promise<string> {
-  const { vega, vl } = await loadVega();
+export async function compileSpec(spec: TopLevelSpec): Promise<object> {
+  const { vl } = await loadVega();
   const withConfig = { ...spec, config: { ...BASE_CONFIG, ...(spec.config ?? {}) } } as TopLevelSpec;
   const problems: string[] = [];
   const collect = (...args: readonly unknown[]): void => void problems.push(args.map(String).join(' '));
@@ -76,7 +76,17 @@ export async function renderSvg(spec: TopLevelSpec): Promise<string> {
   const compiled = vl.compile(withConfig, { logger: logger as never }).spec;
   // Our specs must compile cleanly: a vega-lite warning means a plot is not what we meant.
   if (problems.length > 0) throw new Error(`vega-lite rejected a report plot: ${problems.join('; ')}`);
-  const view = new vega.View(vega.parse(compiled), { renderer: 'none' });
+  return compiled;
+}
+
+/**
+ * Renders one vega-lite spec to SVG text.
+ * @throws {Error} when vega-lite or vega rejects the spec (an internal fault: specs are ours).
+ */
+export async function renderSvg(spec: TopLevelSpec): Promise<string> {
+  const { vega } = await loadVega();
+  const compiled = await compileSpec(spec);
+  const view = new vega.View(vega.parse(compiled as never), { renderer: 'none' });
   try {
     return compactNumbers(await view.toSVG());
   } finally {

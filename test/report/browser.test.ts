@@ -2,6 +2,7 @@ import { existsSync, mkdirSync, writeFileSync } from 'node:fs';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { chromium, type Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { vegaRuntime } from '../../src/cli/vega-runtime.js';
 import { renderReportHtml } from '../../src/report/index.js';
 import { fixtureModel, HOSTILE } from './fixture.js';
 
@@ -65,6 +66,31 @@ describe.skipIf(!haveChromium)('report page in chromium', () => {
     expect(titles[0]).toBe(`${HOSTILE}.csv:8`);
 
     await page.screenshot({ path: `${outDir}report-fixture.png`, fullPage: true });
+    await page.close();
+  });
+
+  it('--interactive: the inlined runtime draws live plots, still with no network request and no error', async () => {
+    mkdirSync(outDir, { recursive: true });
+    const file = `${outDir}report-interactive.html`;
+    const runtime = await vegaRuntime();
+    writeFileSync(file, await renderReportHtml(fixtureModel(), { interactiveRuntime: runtime }));
+    const page = await browser.newPage({ viewport: { width: 900, height: 1200 } });
+    const problems: string[] = [];
+    const requests: string[] = [];
+    page.on('console', (m) => {
+      if (m.type() === 'error') problems.push(m.text());
+    });
+    page.on('pageerror', (e) => problems.push(String(e)));
+    page.on('request', (r) => {
+      if (!r.url().startsWith('file:')) requests.push(r.url());
+    });
+    await page.goto(pathToFileURL(file).href, { waitUntil: 'load' });
+    // vega's live SVG renderer marks its root <svg> with class "marks"; wait until every plot has one.
+    await page.waitForFunction("document.querySelectorAll('.plot > svg.marks').length >= 5", undefined, { timeout: 10_000 });
+    expect(problems).toEqual([]);
+    expect(requests).toEqual([]);
+    expect(await page.locator('.plot[data-error]').count()).toBe(0);
+    expect(await page.evaluate(() => (globalThis as { __pwned?: number }).__pwned)).toBeUndefined();
     await page.close();
   });
 });

@@ -20,6 +20,7 @@ export interface FitCommandOptions extends StudyOptions, FitOverrides {
   readonly where?: string;
   readonly compare?: readonly string[];
   readonly parityBand?: string;
+  readonly interactive?: boolean;
 }
 
 export async function runFit(ctx: CommandContext, inputs: readonly string[], opts: FitCommandOptions): Promise<CommandOutcome> {
@@ -41,6 +42,7 @@ export async function runFit(ctx: CommandContext, inputs: readonly string[], opt
       parityBand,
       argv: ctx.argv,
       warnings: ctx.warnings.items,
+      interactive: opts.interactive === true,
     });
     const targets = (['json', 'csv', 'html'] as const).map((ext) => ({ path: `${target.base}.${ext}`, label: `${target.label}.${ext}`, text: texts[ext] }));
     await commitTogether(targets);
