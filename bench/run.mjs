@@ -336,9 +336,79 @@ async function benchReduce() {
 }
 
 process.stdout.write(`similis bench: node ${process.version}, ${cpus().length} cores (${cpus()[0]?.model ?? 'unknown cpu'})\n`);
+/**
+ * The HTML fit report at 1,000 and 100,000 points: time to build the page in Node (fit excluded),
+ * its size, and the time Debian's chromium takes to load and paint it (skipped without chromium).
+ * Targets: a 100,000-point report under 5 MB and rendered in under 3 s.
+ */
+async function benchReport() {
+  section('HTML report: page size and render time (median of 3)');
+  const { parseFormula } = await import('../dist/expr/index.js');
+  const { fitCorrelation } = await import('../dist/fit/index.js');
+  const { buildReportModel } = await import('../dist/report/build-model.js');
+  const { renderReportHtml } = await import('../dist/report/index.js');
+  const { existsSync, mkdtempSync, writeFileSync, rmSync } = await import('node:fs');
+  const { tmpdir } = await import('node:os');
+  const { join } = await import('node:path');
+  const { pathToFileURL } = await import('node:url');
+  const dir = mkdtempSync(join(tmpdir(), 'similis-bench-report-'));
+  let browser = null;
+  if (existsSync('/usr/bin/chromium')) {
+    const { chromium } = await import('playwright-core');
+    browser = await chromium.launch({ executablePath: '/usr/bin/chromium', args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run'] });
+  }
+  try {
+    for (const n of [1_000, 100_000]) {
+      let seed = 7;
+      const rnd = () => ((seed = (seed * 16807) % 2147483647) / 2147483647);
+      const re = new Float64Array(n);
+      const ld = new Float64Array(n);
+      const f = new Float64Array(n);
+      for (let i = 0; i < n; i++) {
+        re[i] = 4000 * Math.pow(25, rnd());
+        ld[i] = [20, 60, 180][i % 3];
+        f[i] = 0.3164 * re[i] ** -0.25 * ld[i] ** 0.02 * (1 + 0.04 * (rnd() - 0.5));
+      }
+      const columns = new Map([['Re', re], ['LD', ld], ['f', f]]);
+      const rowSource = { file: ['bench.csv'], fileIndex: new Uint32Array(n), line: Uint32Array.from({ length: n }, (_, i) => i + 2) };
+      const fit = fitCorrelation({ n, columns, rowSource, response: 'f', model: parseFormula('C*Re^a*LD^b'), parameters: new Map([['C', 0.3], ['a', -0.25], ['b', 0]]), method: 'auto' }, { warn() {} });
+      const tBuild = [];
+      const tPaint = [];
+      let page = '';
+      for (let r = 0; r < 3; r++) {
+        const t0 = performance.now();
+        const model = buildReportModel({ title: 'bench', fit, columns, rowSource, groups: ['Re', 'LD'], excluded: [], warnings: [], comparisons: [], files: [], study: null, tool: 'similis bench', date: '-', platform: '-', command: '-' });
+        page = await renderReportHtml(model);
+        tBuild.push(performance.now() - t0);
+        if (browser !== null) {
+          const file = join(dir, `report-${n}.html`);
+          writeFileSync(file, page);
+          const tab = await browser.newPage({ viewport: { width: 900, height: 1200 } });
+          const t1 = performance.now();
+          await tab.goto(pathToFileURL(file).href, { waitUntil: 'load' });
+          await tab.evaluate('new Promise((ok) => requestAnimationFrame(() => requestAnimationFrame(ok)))');
+          tPaint.push(performance.now() - t1);
+          await tab.close();
+        }
+      }
+      const mb = page.length / (1024 * 1024);
+      row(`${n.toLocaleString('en-US')} points: build page in Node`, `${median(tBuild).toFixed(0)} ms`);
+      row(`${n.toLocaleString('en-US')} points: page size`, `${mb.toFixed(2)} MB`, n === 100_000 ? (mb < 5 ? 'target < 5 MB: met' : 'target < 5 MB: MISSED') : '');
+      if (browser !== null) {
+        const paint = median(tPaint);
+        row(`${n.toLocaleString('en-US')} points: chromium load + paint`, `${paint.toFixed(0)} ms`, n === 100_000 ? (paint < 3000 ? 'target < 3 s: met' : 'target < 3 s: MISSED') : '');
+      } else row(`${n.toLocaleString('en-US')} points: chromium load + paint`, 'skipped', '/usr/bin/chromium not found');
+    }
+  } finally {
+    await browser?.close();
+    rmSync(dir, { recursive: true, force: true });
+  }
+}
+
 await benchStartup();
 await benchFormula();
 await benchCorrelations();
 await benchFit();
 await benchReduce();
+await benchReport();
 process.stdout.write('\n');
