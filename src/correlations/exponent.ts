@@ -87,8 +87,9 @@ function trend(fitted: number, handbook: number, name: string): string {
   return `change with ${name} more`;
 }
 
+/** 4 significant digits: enough to show a difference of a few parts in a thousand against an interval edge. */
 function num(x: number): string {
-  return Number.isFinite(x) ? String(Number(x.toPrecision(3))) : String(x);
+  return Number.isFinite(x) ? String(Number(x.toPrecision(4))) : String(x);
 }
 
 function describePoint(point: Readonly<Record<string, number>>): string {
