@@ -119,7 +119,11 @@ export function progressLine(io: CliIo, file: InputFile, counter: { bytes: numbe
   };
 }
 
-/** Streams one rig file, with a progress line when it is long, and reduces it with its plan. */
+/**
+ * Streams one rig file, with a progress line when it is long, and reduces it with its plan
+ * (uncertainties and their Monte Carlo check included when the plan has them; their warnings go
+ * to ctx.warnings).
+ */
 export async function reduceFile(ctx: CommandContext, f: InputFile, plan: ReductionPlan, delimiter: Delimiter | undefined): Promise<ReducedFile> {
   const counter = { bytes: 0 };
   const progress = progressLine(ctx.io, f, counter);
@@ -130,7 +134,7 @@ export async function reduceFile(ctx: CommandContext, f: InputFile, plan: Reduct
       sink: ctx.warnings,
       ...(progress.onProgress === undefined ? {} : { onProgress: progress.onProgress }),
     });
-    return reduceTable(table, plan);
+    return reduceTable(table, plan, plan.functions, ctx.warnings);
   } finally {
     progress.done();
   }

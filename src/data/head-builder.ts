@@ -1,11 +1,13 @@
 import { InputError, type WarningSink } from '../common/errors.js';
+import type { FunctionTable } from '../expr/index.js';
+import { PROPERTY_FUNCTIONS } from '../properties/index.js';
 import { detectDelimiter } from './cells.js';
 import { parseHeader, type ParsedHeader } from './header.js';
 import { DATA_ERROR } from './kinds.js';
 import { dataMessages } from './messages.js';
 import { parseMetaLine, type UncertaintyLine } from './metadata.js';
 import type { Delimiter, FileComment, FileConstant, RigHead } from './table.js';
-import { checkUncertaintyDimension, parseUncertainty } from './uncertainty.js';
+import { checkRelativeTemperature, checkUncertaintyDimension, parseUncertainty } from './uncertainty.js';
 
 const HASH = 35;
 
@@ -25,12 +27,14 @@ export class HeadBuilder {
     private readonly file: string,
     private readonly delimiter: Delimiter | undefined,
     private readonly sink: WarningSink,
+    private readonly functions: FunctionTable = PROPERTY_FUNCTIONS,
   ) {}
 
   /**
    * One line before the first data row.
    * @throws {InputError} 'csv-encoding' (not text), metadata and header kinds (see parseMetaLine,
-   *   parseHeader), 'csv-duplicate-name', 'csv-uncertainty-name', 'csv-uncertainty-dimension'.
+   *   parseHeader), 'csv-duplicate-name', 'csv-uncertainty-name', 'csv-uncertainty-dimension',
+   *   'csv-uncertainty-relative-temperature'.
    */
   line(text: string, lineNo: number): void {
     if (text.trim() === '') return;
@@ -42,7 +46,7 @@ export class HeadBuilder {
       this.result = this.header(text, lineNo);
       return;
     }
-    const meta = parseMetaLine(text, lineNo, this.file, this.sink);
+    const meta = parseMetaLine(text, lineNo, this.file, this.sink, this.functions);
     if (meta.kind === 'uncertainty') this.uncertaintyLines.push(meta.uncertainty);
     else if (meta.kind === 'comment') this.comments.push(meta.comment);
     else {
@@ -55,7 +59,7 @@ export class HeadBuilder {
 
   private header(text: string, lineNo: number): { head: RigHead; header: ParsedHeader } {
     const delimiter = this.delimiter ?? detectDelimiter(text);
-    const header = parseHeader(text, delimiter, lineNo, this.file, this.sink);
+    const header = parseHeader(text, delimiter, lineNo, this.file, this.sink, this.functions);
     for (const c of this.constants) {
       const col = header.columns.find((h) => h.name === c.name);
       if (col !== undefined) {
@@ -64,12 +68,13 @@ export class HeadBuilder {
     }
     const uncertainties = this.uncertaintyLines.map((u) => {
       const spec = parseUncertainty(u.name, u.text, u.where, DATA_ERROR.uncertainty, this.sink);
-      const dimension = header.columns.find((h) => h.name === u.name)?.unit.dimension ?? this.constants.find((k) => k.name === u.name)?.unit.dimension;
-      if (dimension === undefined) {
+      const unit = header.columns.find((h) => h.name === u.name)?.unit ?? this.constants.find((k) => k.name === u.name)?.unit;
+      if (unit === undefined) {
         const known = [...header.columns.map((h) => h.name), ...this.constants.map((k) => k.name)];
         throw new InputError(DATA_ERROR.uncertaintyName, dataMessages.uncertaintyUnknownName(u.name, known), u.where);
       }
-      checkUncertaintyDimension(spec, dimension, DATA_ERROR.uncertaintyDimension);
+      checkUncertaintyDimension(spec, unit.dimension, DATA_ERROR.uncertaintyDimension);
+      checkRelativeTemperature(spec, unit, DATA_ERROR.uncertaintyRelativeTemperature);
       return spec;
     });
     const head: RigHead = {

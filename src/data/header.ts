@@ -1,5 +1,6 @@
 import { InputError, type SourceSpan, type WarningSink } from '../common/errors.js';
-import { checkUserName } from '../expr/index.js';
+import { checkUserName, type FunctionTable } from '../expr/index.js';
+import { PROPERTY_FUNCTIONS } from '../properties/index.js';
 import { dimensionless, parseUnit, type Unit } from '../units/index.js';
 import { positionedCells } from './cells.js';
 import { DATA_ERROR } from './kinds.js';
@@ -9,7 +10,8 @@ import type { ColumnHead, Delimiter } from './table.js';
 /**
  * The header row of a rig file: one cell per column, `name [unit]` or a bare `name`
  * (dimensionless, or text). Names must be usable in formulas (a letter or _, then letters, digits
- * or _; not `pi`, `exp`, `and`...), and unique.
+ * or _; not `pi`, `exp`, `and`, nor a function formulas may call such as `water_density`), and
+ * unique.
  */
 
 export interface ParsedHeader {
@@ -27,7 +29,14 @@ const CELL = /^(\s*)([^[\]]*?)(\s*)(?:\[([^\]]*)\])?(\s*)$/;
  *   'formula-reserved-name' (at the name), unit kinds (at the unit's column in the line).
  * @example parseHeader('Q [L/min],dp [kPa]', ',', 7, 'a.csv').columns[1].unit.canonical // => 'kPa'
  */
-export function parseHeader(lineText: string, delimiter: Delimiter, line: number, file: string, sink?: WarningSink): ParsedHeader {
+export function parseHeader(
+  lineText: string,
+  delimiter: Delimiter,
+  line: number,
+  file: string,
+  sink?: WarningSink,
+  functions: FunctionTable = PROPERTY_FUNCTIONS,
+): ParsedHeader {
   const { cells, unclosedQuote } = positionedCells(lineText, delimiter);
   const at = (column: number, endColumn: number): SourceSpan => ({ file, line, column, endColumn, text: lineText });
   if (unclosedQuote !== null) {
@@ -43,7 +52,7 @@ export function parseHeader(lineText: string, delimiter: Delimiter, line: number
   const seen = new Map<string, ColumnHead>();
   cells.forEach((cell, index) => {
     const offset = cell.start + (cell.quoted ? lineText.indexOf('"', cell.start) - cell.start + 1 : 0);
-    const column = parseHeaderCell(cell.value, index, offset, at, sink);
+    const column = parseHeaderCell(cell.value, index, offset, at, sink, functions);
     const earlier = seen.get(column.name);
     if (earlier !== undefined) {
       const where = column.where;
@@ -61,6 +70,7 @@ function parseHeaderCell(
   offset: number,
   at: (column: number, endColumn: number) => SourceSpan,
   sink: WarningSink | undefined,
+  functions: FunctionTable,
 ): ColumnHead {
   const cellSpan = at(offset + 1, offset + Math.max(1, text.length) + 1);
   if (text.trim() === '') throw new InputError(DATA_ERROR.headerCell, dataMessages.emptyHeaderCell(index + 1), cellSpan);
@@ -77,7 +87,7 @@ function parseHeaderCell(
     throw new InputError(DATA_ERROR.headerCell, dataMessages.unitInParentheses(paren[1]!, paren[2]!), nameSpan);
   }
   if (name === '') throw new InputError(DATA_ERROR.headerCell, dataMessages.emptyHeaderName(index + 1), cellSpan);
-  checkUserName(name, nameSpan);
+  checkUserName(name, nameSpan, functions);
   let unit: Unit = dimensionless();
   if (unitText !== undefined) {
     const unitColumn = offset + text.indexOf('[') + 2;

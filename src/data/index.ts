@@ -15,7 +15,7 @@ export { detectDelimiter, delimiterName, positionedCells, type PositionedCell } 
 export { explainBadNumber, isMissingMarker, MISSING_MARKERS, parseDecimal, strictDecimal } from './number-cell.js';
 export { asciiText, scanDecimalBytes } from './byte-scan.js';
 export { parseQuantityText, type QuantityText } from './quantity-text.js';
-export { checkUncertaintyDimension, parseUncertainty } from './uncertainty.js';
+export { checkRelativeTemperature, checkUncertaintyDimension, parseUncertainty } from './uncertainty.js';
 export { parseHeader, type ParsedHeader } from './header.js';
 export { looksLikeConstant, parseMetaLine, type MetaLine, type UncertaintyLine } from './metadata.js';
 export { RigReader, type ReadOptions } from './reader.js';

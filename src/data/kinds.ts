@@ -35,6 +35,8 @@ export const DATA_ERROR = {
   uncertaintyName: 'csv-uncertainty-name',
   /** `# u(name) = x unit` whose unit does not measure what `name` measures. */
   uncertaintyDimension: 'csv-uncertainty-dimension',
+  /** `# u(T) = 0.5 %` for a temperature logged in degC or degF: a percentage of an affine temperature means nothing. */
+  uncertaintyRelativeTemperature: 'csv-uncertainty-relative-temperature',
   /** A delimiter option other than , ; tab. */
   delimiter: 'csv-delimiter',
 

@@ -69,6 +69,9 @@ export const dataMessages = {
   uncertaintyUnknownName: (name: string, known: readonly string[]) => `u(${name}) names no column or constant of this file: the names are ${list(known)}`,
   uncertaintyDimension: (name: string, quantity: string, unit: string, unitQuantity: string) =>
     `the uncertainty of ${name} (${quantity}) is given in ${unit}, which is ${unitQuantity}: give it in a unit of the same kind, or as a percentage`,
+  uncertaintyRelativeTemperature: (name: string, text: string, unit: string) =>
+    `the uncertainty of ${name} (${text}) has a part in percent, but ${name} is in ${unit}, a temperature scale with an arbitrary zero: ` +
+    `a percentage of it means nothing (1 % of 20 degC is 0.2 K, of the same 293.15 K 2.9 K); give the uncertainty as a temperature, e.g. 0.1 K or 0.2 ${unit}`,
 
   // Study files
   studyYaml: (reason: string) => `the study file is not valid YAML: ${reason}`,

@@ -1,5 +1,6 @@
 import { InputError, type SourceSpan, type WarningSink } from '../common/errors.js';
-import { checkUserName } from '../expr/index.js';
+import { checkUserName, type FunctionTable } from '../expr/index.js';
+import { PROPERTY_FUNCTIONS } from '../properties/index.js';
 import { DATA_ERROR } from './kinds.js';
 import { parseQuantityText } from './quantity-text.js';
 import type { FileComment, FileConstant } from './table.js';
@@ -37,7 +38,7 @@ const NUMERIC_VALUE = /^\s*[+-]?(?:\d+(?:[.,]\d*)?|\.\d+)(?:[eE][+-]?\d+)?(?:\s|
  *   the column of the offending text in the line.
  * @example parseMetaLine('# D = 0.5 in', 3, 'loop-a.csv').kind // => 'constant' (valueSI 0.0127)
  */
-export function parseMetaLine(lineText: string, line: number, file: string, sink?: WarningSink): MetaLine {
+export function parseMetaLine(lineText: string, line: number, file: string, sink?: WarningSink, functions: FunctionTable = PROPERTY_FUNCTIONS): MetaLine {
   const at = (column: number, endColumn?: number): SourceSpan => ({
     file,
     line,
@@ -49,14 +50,14 @@ export function parseMetaLine(lineText: string, line: number, file: string, sink
   if (u !== null) {
     const name = u[1]!;
     const nameColumn = lineText.indexOf(name, lineText.indexOf('(')) + 1;
-    checkUserName(name, at(nameColumn, nameColumn + Math.max(1, name.length)));
+    checkUserName(name, at(nameColumn, nameColumn + Math.max(1, name.length)), functions);
     return { kind: 'uncertainty', uncertainty: { name, text: lineText.slice(u[0].length), where: at(u[0].length + 1) } };
   }
   const a = ASSIGNMENT.exec(lineText);
   if (a !== null && NUMERIC_VALUE.test(lineText.slice(a[0].length))) {
     const name = a[1]!;
     const nameColumn = lineText.indexOf(name) + 1;
-    checkUserName(name, at(nameColumn, nameColumn + name.length));
+    checkUserName(name, at(nameColumn, nameColumn + name.length), functions);
     const valueText = lineText.slice(a[0].length);
     const valueColumn = a[0].length + 1;
     let q;

@@ -1,4 +1,5 @@
 import { InputError, IGNORE_WARNINGS, type WarningSink } from '../common/errors.js';
+import type { FunctionTable } from '../expr/index.js';
 import { HeadBuilder } from './head-builder.js';
 import type { ParsedHeader } from './header.js';
 import { DATA_ERROR } from './kinds.js';
@@ -47,6 +48,11 @@ export interface ReadOptions {
    * strings; 'csv-parse': every row goes through csv-parse (the oracle the tests compare with).
    */
   readonly rows?: 'scan' | 'csv-parse';
+  /**
+   * The functions formulas may call (default PROPERTY_FUNCTIONS): a column or constant may not
+   * take one of their names, since a formula could not refer to it.
+   */
+  readonly functions?: FunctionTable;
 }
 
 const QUOTED_BATCH = 256;
@@ -81,7 +87,7 @@ export class RigReader {
     this.file = options.file;
     this.sink = options.sink ?? IGNORE_WARNINGS;
     this.delimiter = options.delimiter;
-    this.headBuilder = new HeadBuilder(this.file, options.delimiter, this.sink);
+    this.headBuilder = new HeadBuilder(this.file, options.delimiter, this.sink, options.functions);
   }
 
   /** The head (everything up to the header), once the header line has been read. */

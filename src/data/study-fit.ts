@@ -1,6 +1,7 @@
 import { isScalar } from 'yaml';
 import { InputError, type SourceSpan } from '../common/errors.js';
-import { checkUserName } from '../expr/index.js';
+import { checkUserName, type FunctionTable } from '../expr/index.js';
+import { PROPERTY_FUNCTIONS } from '../properties/index.js';
 import { DATA_ERROR } from './kinds.js';
 import { dataMessages } from './messages.js';
 import type { FitMethod, FitParameter, FitSpec, Located, WeightsSpec } from './study-types.js';
@@ -21,7 +22,7 @@ const ROBUST = ['huber', 'bisquare', 'none'] as const;
  *   choice, a parameter without a number), formula kinds at their column in the file.
  * @example readFitSection(source, node, at).method.value // => 'auto' when not given
  */
-export function readFitSection(source: YamlSource, node: unknown, at: SourceSpan): FitSpec {
+export function readFitSection(source: YamlSource, node: unknown, at: SourceSpan, functions: FunctionTable = PROPERTY_FUNCTIONS): FitSpec {
   const entries = mapEntries(source, node, 'fit', FIT_KEYS);
   const get = (key: string) => entries.find((e) => e.key === key)?.value;
   const response = get('response');
@@ -30,11 +31,11 @@ export function readFitSection(source: YamlSource, node: unknown, at: SourceSpan
   const regimes = get('regimes');
   return {
     response: response === undefined ? null : located(textValue(source, response, 'fit.response')),
-    model: model === undefined ? null : formulaValue(source, model, 'fit.model'),
-    parameters: readParameters(source, get('parameters')),
+    model: model === undefined ? null : formulaValue(source, model, 'fit.model', functions),
+    parameters: readParameters(source, get('parameters'), functions),
     method: readMethod(source, get('method'), at),
-    weights: readWeights(source, get('weights'), at),
-    where: where === undefined ? null : formulaValue(source, where, 'fit.where'),
+    weights: readWeights(source, get('weights'), at, functions),
+    where: where === undefined ? null : formulaValue(source, where, 'fit.where', functions),
     regimes: regimes === undefined ? null : rawNode(source, regimes),
     robust: readRobust(source, get('robust')),
     at,
@@ -45,9 +46,9 @@ function located(t: { text: string; where: SourceSpan }): Located<string> {
   return { value: t.text.trim(), where: t.where };
 }
 
-function readParameters(source: YamlSource, node: unknown): FitParameter[] {
+function readParameters(source: YamlSource, node: unknown, functions: FunctionTable): FitParameter[] {
   return mapEntries(source, node, 'fit.parameters', null).map(({ key, keyWhere, value }) => {
-    checkUserName(key, keyWhere);
+    checkUserName(key, keyWhere, functions);
     const n = resolved(source, value);
     if (!isScalar(n) || typeof n.value !== 'number' || !Number.isFinite(n.value)) {
       throw new InputError(DATA_ERROR.studyFit, dataMessages.fitParameter(key, describeNode(n)), spanOf(source, isScalar(n) ? n : null) ?? keyWhere);
@@ -65,11 +66,11 @@ function readMethod(source: YamlSource, node: unknown, at: SourceSpan): Located<
   return { value: method, where: t.where };
 }
 
-function readWeights(source: YamlSource, node: unknown, at: SourceSpan): WeightsSpec {
+function readWeights(source: YamlSource, node: unknown, at: SourceSpan, functions: FunctionTable): WeightsSpec {
   if (node === undefined) return { kind: 'none', where: at };
   const n = resolved(source, node);
-  if (isScalar(n) && (n.value === 'none' || n.value === 'uncertainty')) return { kind: n.value, where: spanOf(source, n) };
-  return { kind: 'formula', formula: formulaValue(source, n, 'fit.weights') };
+  if (isScalar(n) && (n.value === 'none' || n.value === 'uncertainty' || n.value === 'relative')) return { kind: n.value, where: spanOf(source, n) };
+  return { kind: 'formula', formula: formulaValue(source, n, 'fit.weights', functions) };
 }
 
 function readRobust(source: YamlSource, node: unknown): Located<(typeof ROBUST)[number]> | null {

@@ -1,5 +1,6 @@
 import { InputError, type SourceSpan, type WarningSink } from '../common/errors.js';
-import { checkUserName, parseFormula } from '../expr/index.js';
+import { checkUserName, parseFormula, type FunctionTable } from '../expr/index.js';
+import { PROPERTY_FUNCTIONS } from '../properties/index.js';
 import { DATA_ERROR } from './kinds.js';
 import { dataMessages } from './messages.js';
 import { parseQuantityText } from './quantity-text.js';
@@ -32,20 +33,21 @@ export function emptyStudy(): Study {
  * The study with the flags applied.
  * @throws {InputError} 'usage' for an argument that is not NAME=TEXT; 'study-constant', unit and
  *   formula kinds at their column within the flag (file 'command line'); 'study-duplicate-name'.
+ * @param functions what the formulas may call (default: built-in functions and fluid properties)
  * @example applyStudyFlags(emptyStudy(), { group: ['Re=rho*U*D/mu'] }).groups[0].name // => 'Re'
  */
-export function applyStudyFlags(study: Study, flags: StudyFlags, sink: WarningSink): Study {
+export function applyStudyFlags(study: Study, flags: StudyFlags, sink: WarningSink, functions: FunctionTable = PROPERTY_FUNCTIONS): Study {
   let constants = [...study.constants];
   let derived = [...study.derived];
   let groups = [...study.groups];
   for (const arg of flags.constants ?? []) {
-    const c = constantFlag(arg, sink);
+    const c = constantFlag(arg, sink, functions);
     const earlier = constants.find((k) => k.name === c.name);
     if (earlier !== undefined) sink.warn({ code: 'constant-overridden', message: overrideMessage(c.name, earlier.text, c.text, earlier.where), where: c.where });
     constants = [...constants.filter((k) => k.name !== c.name), c];
   }
-  for (const arg of flags.derive ?? []) derived = replaceNamed(derived, formulaFlag('--derive', arg), sink);
-  for (const arg of flags.group ?? []) groups = replaceNamed(groups, formulaFlag('--group', arg), sink);
+  for (const arg of flags.derive ?? []) derived = replaceNamed(derived, formulaFlag('--derive', arg, functions), sink);
+  for (const arg of flags.group ?? []) groups = replaceNamed(groups, formulaFlag('--group', arg, functions), sink);
   const result: Study = { ...study, constants, derived, groups };
   checkStudyNames(result);
   return result;
@@ -56,30 +58,35 @@ export function applyStudyFlags(study: Study, flags: StudyFlags, sink: WarningSi
  * @throws {InputError} formula kinds at their column within the flag.
  * @example whereFlag('Re > 4000').formula.text // => 'Re > 4000'
  */
-export function whereFlag(text: string): LocatedFormula {
+export function whereFlag(text: string, functions: FunctionTable = PROPERTY_FUNCTIONS): LocatedFormula {
   const flagText = `--where ${text}`;
   const where: SourceSpan = { file: FILE, column: '--where '.length + 1, text: flagText };
   try {
-    return { formula: parseFormula(text), where, columnsExact: true };
+    return { formula: parseFormula(text, { functions }), where, columnsExact: true };
   } catch (e) {
     if (e instanceof InputError) throw e.relocate(where);
     throw e;
   }
 }
 
-function splitFlag(flag: string, arg: string, example: string): { name: string; value: string; where: SourceSpan; valueWhere: SourceSpan } {
+function splitFlag(
+  flag: string,
+  arg: string,
+  example: string,
+  functions: FunctionTable,
+): { name: string; value: string; where: SourceSpan; valueWhere: SourceSpan } {
   const text = `${flag} ${arg}`;
   const eq = arg.indexOf('=');
   const base = flag.length + 2;
   if (eq <= 0) throw new InputError(DATA_ERROR.flag, dataMessages.commandLineFlag(flag, arg, example), { file: FILE, column: base, text });
   const name = arg.slice(0, eq).trim();
   const where: SourceSpan = { file: FILE, column: base, endColumn: base + eq, text };
-  checkUserName(name, where);
+  checkUserName(name, where, functions);
   return { name, value: arg.slice(eq + 1), where, valueWhere: { file: FILE, column: base + eq + 1, text } };
 }
 
-function constantFlag(arg: string, sink: WarningSink): StudyConstant {
-  const { name, value, where, valueWhere } = splitFlag('--const', arg, '"VALUE UNIT", as in D="0.5 in"');
+function constantFlag(arg: string, sink: WarningSink, functions: FunctionTable): StudyConstant {
+  const { name, value, where, valueWhere } = splitFlag('--const', arg, '"VALUE UNIT", as in D="0.5 in"', functions);
   try {
     const q = parseQuantityText(value, DATA_ERROR.studyConstant, sink);
     return { name, valueSI: q.valueSI, text: value.trim(), unit: q.unit, where, origin: 'command line' };
@@ -89,10 +96,11 @@ function constantFlag(arg: string, sink: WarningSink): StudyConstant {
   }
 }
 
-function formulaFlag(flag: '--derive' | '--group', arg: string): NamedFormula {
-  const { name, value, where, valueWhere } = splitFlag(flag, arg, flag === '--derive' ? 'FORMULA, as in U="4*Q/(pi*D^2)"' : 'FORMULA, as in Re="rho*U*D/mu"');
+function formulaFlag(flag: '--derive' | '--group', arg: string, functions: FunctionTable): NamedFormula {
+  const example = flag === '--derive' ? 'FORMULA, as in U="4*Q/(pi*D^2)"' : 'FORMULA, as in Re="rho*U*D/mu"';
+  const { name, value, where, valueWhere } = splitFlag(flag, arg, example, functions);
   try {
-    return { name, formula: parseFormula(value), where: valueWhere, columnsExact: true, nameWhere: where, origin: 'command line' };
+    return { name, formula: parseFormula(value, { functions }), where: valueWhere, columnsExact: true, nameWhere: where, origin: 'command line' };
   } catch (e) {
     if (e instanceof InputError) throw e.relocate(valueWhere);
     throw e;

@@ -58,10 +58,14 @@ export interface FitParameter {
 
 export type FitMethod = 'auto' | 'log-linear' | 'nonlinear';
 
-/** How rows are weighted in the fit: not at all, from the propagated uncertainties, or by a formula. */
+/**
+ * How rows are weighted in the fit: not at all, from the propagated uncertainties (1/u^2, in log
+ * space (y/u)^2), by constant relative weights in linear space (1/y^2), or by a formula.
+ */
 export type WeightsSpec =
   | { readonly kind: 'none'; readonly where: SourceSpan }
   | { readonly kind: 'uncertainty'; readonly where: SourceSpan }
+  | { readonly kind: 'relative'; readonly where: SourceSpan }
   | { readonly kind: 'formula'; readonly formula: LocatedFormula };
 
 /**

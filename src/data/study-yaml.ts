@@ -1,6 +1,7 @@
 import { isAlias, isMap, isScalar, isSeq, LineCounter, parseDocument, type Document, type Node, type Scalar, type YAMLMap } from 'yaml';
 import { InputError, type SourceSpan } from '../common/errors.js';
-import { parseFormula, type Formula } from '../expr/index.js';
+import { parseFormula, type Formula, type FunctionTable } from '../expr/index.js';
+import { PROPERTY_FUNCTIONS } from '../properties/index.js';
 import { DATA_ERROR } from './kinds.js';
 import { dataMessages } from './messages.js';
 import type { RawNode } from './study-types.js';
@@ -176,11 +177,17 @@ export function textValue(source: YamlSource, node: unknown, key: string): { tex
 }
 
 /**
- * A scalar parsed as a formula, with errors placed in the study file.
+ * A scalar parsed as a formula (calling the functions of `functions`, default the built-in ones
+ * and the fluid properties), with errors placed in the study file.
  * @throws {InputError} 'study-type' for a non-scalar; formula kinds at their column in the file.
  * @example formulaValue(source, node, 'groups.Re').formula.text // => 'rho*U*D/mu'
  */
-export function formulaValue(source: YamlSource, node: unknown, key: string): { formula: Formula; where: SourceSpan; columnsExact: boolean } {
+export function formulaValue(
+  source: YamlSource,
+  node: unknown,
+  key: string,
+  functions: FunctionTable = PROPERTY_FUNCTIONS,
+): { formula: Formula; where: SourceSpan; columnsExact: boolean } {
   const n = resolved(source, node);
   if (!isScalar(n) || n.value === null || typeof n.value === 'boolean') {
     throw new InputError(DATA_ERROR.studyType, dataMessages.formulaExpected(key, describeNode(n)), spanOf(source, (n ?? null) as Node | null));
@@ -188,7 +195,7 @@ export function formulaValue(source: YamlSource, node: unknown, key: string): { 
   const { text, exact, start } = scalarText(source, n);
   const where = spanAt(source, start, start + text.length);
   try {
-    return { formula: parseFormula(text), where, columnsExact: exact };
+    return { formula: parseFormula(text, { functions }), where, columnsExact: exact };
   } catch (e) {
     if (e instanceof InputError) throw placeInside(e, where, exact);
     throw e;

@@ -1,6 +1,7 @@
 import { isScalar, isSeq } from 'yaml';
 import { InputError, IGNORE_WARNINGS, type SourceSpan, type WarningSink } from '../common/errors.js';
-import { checkUserName } from '../expr/index.js';
+import { checkUserName, type FunctionTable } from '../expr/index.js';
+import { PROPERTY_FUNCTIONS } from '../properties/index.js';
 import { DATA_ERROR } from './kinds.js';
 import { dataMessages } from './messages.js';
 import { parseQuantityText } from './quantity-text.js';
@@ -41,12 +42,14 @@ export const STUDY_KEYS = ['title', 'data', 'constants', 'derived', 'groups', 'f
 /**
  * Reads and validates a study file's text.
  * @param file the study file name as given (used in every message)
+ * @param functions what formulas may call (default: the built-in functions and the fluid
+ *   properties, water_density(T)...); no name of the study may be one of them
  * @throws {InputError} 'study-yaml', 'study-limits', 'study-unknown-key' (with the nearest key),
  *   'study-type', 'study-constant', 'study-duplicate-name', 'study-fit', 'study-uncertainty',
  *   formula and unit kinds, each at the line and column of the offending text.
  * @example loadStudy('groups:\n  Re: rho*U*D/mu\n', 'study.yaml').groups[0].name // => 'Re'
  */
-export function loadStudy(text: string, file: string, sink: WarningSink = IGNORE_WARNINGS): Study {
+export function loadStudy(text: string, file: string, sink: WarningSink = IGNORE_WARNINGS, functions: FunctionTable = PROPERTY_FUNCTIONS): Study {
   const source = parseStudyYaml(text, file);
   const root = resolved(source, source.doc.contents);
   if (root === null || root === undefined || (isScalar(root) && root.value === null)) {
@@ -58,12 +61,12 @@ export function loadStudy(text: string, file: string, sink: WarningSink = IGNORE
     file,
     title: readTitle(source, section('title')?.value),
     data: readData(source, section('data')?.value),
-    constants: readConstants(source, section('constants')?.value, sink),
-    derived: readFormulas(source, section('derived')?.value, 'derived'),
-    groups: readFormulas(source, section('groups')?.value, 'groups'),
-    fit: section('fit') === undefined ? null : readFitSection(source, section('fit')!.value, section('fit')!.keyWhere),
+    constants: readConstants(source, section('constants')?.value, sink, functions),
+    derived: readFormulas(source, section('derived')?.value, 'derived', functions),
+    groups: readFormulas(source, section('groups')?.value, 'groups', functions),
+    fit: section('fit') === undefined ? null : readFitSection(source, section('fit')!.value, section('fit')!.keyWhere, functions),
     compare: section('compare') === undefined ? null : rawNode(source, section('compare')!.value),
-    uncertainty: readUncertainty(source, section('uncertainty')?.value, sink),
+    uncertainty: readUncertainty(source, section('uncertainty')?.value, sink, functions),
   };
   checkStudyNames(study);
   return study;
@@ -88,9 +91,9 @@ function readData(source: YamlSource, node: unknown): Located<string>[] {
   return [{ value: t.text, where: t.where }];
 }
 
-function readConstants(source: YamlSource, node: unknown, sink: WarningSink): StudyConstant[] {
+function readConstants(source: YamlSource, node: unknown, sink: WarningSink, functions: FunctionTable): StudyConstant[] {
   return mapEntries(source, node, 'constants', null).map(({ key, keyWhere, value }) => {
-    checkUserName(key, keyWhere);
+    checkUserName(key, keyWhere, functions);
     const t = textValue(source, value, `constants.${key}`);
     let q;
     try {
@@ -103,17 +106,17 @@ function readConstants(source: YamlSource, node: unknown, sink: WarningSink): St
   });
 }
 
-function readFormulas(source: YamlSource, node: unknown, section: 'derived' | 'groups'): NamedFormula[] {
+function readFormulas(source: YamlSource, node: unknown, section: 'derived' | 'groups', functions: FunctionTable): NamedFormula[] {
   return mapEntries(source, node, section, null).map(({ key, keyWhere, value }) => {
-    checkUserName(key, keyWhere);
-    const { formula, where, columnsExact } = formulaValue(source, value, `${section}.${key}`);
+    checkUserName(key, keyWhere, functions);
+    const { formula, where, columnsExact } = formulaValue(source, value, `${section}.${key}`, functions);
     return { name: key, formula, where, columnsExact, nameWhere: keyWhere, origin: 'study' as const };
   });
 }
 
-function readUncertainty(source: YamlSource, node: unknown, sink: WarningSink): UncertaintySpec[] {
+function readUncertainty(source: YamlSource, node: unknown, sink: WarningSink, functions: FunctionTable): UncertaintySpec[] {
   return mapEntries(source, node, 'uncertainty', null).map(({ key, keyWhere, value }) => {
-    checkUserName(key, keyWhere);
+    checkUserName(key, keyWhere, functions);
     const t = textValue(source, value, `uncertainty.${key}`);
     return parseUncertainty(key, t.text, t.where, DATA_ERROR.studyUncertainty, sink);
   });

@@ -1,5 +1,5 @@
 import { InputError, type SourceSpan, type WarningSink } from '../common/errors.js';
-import type { Dimension } from '../units/index.js';
+import type { Dimension, Unit } from '../units/index.js';
 import { describeDimension } from '../units/index.js';
 import { dataMessages } from './messages.js';
 import { parseQuantityText } from './quantity-text.js';
@@ -95,3 +95,17 @@ function columnsAt(where: SourceSpan, offset: number, length: number): SourceSpa
   return { column: where.column + offset, endColumn: where.column + offset + Math.max(1, length) };
 }
 
+
+/**
+ * Refuses a relative part (a percentage) on a quantity read in an affine temperature unit (a bare
+ * degC or degF): a percentage of a temperature whose zero is arbitrary depends on the scale, so
+ * it cannot be a statement about the instrument (common practice: a percentage presupposes a
+ * true zero). K and degR have one and accept a percentage; so do temperature differences
+ * (delta_degC).
+ * @throws {InputError} `kind`, at the uncertainty's position, saying what to write instead.
+ * @example checkRelativeTemperature(parseUncertainty('T', '0.5 %', {}, 'csv-uncertainty'), parseUnit('degC'), 'csv-uncertainty-relative-temperature') // throws
+ */
+export function checkRelativeTemperature(spec: UncertaintySpec, unit: Unit, kind: string): void {
+  if (spec.relative === null || unit.temperature !== 'absolute') return;
+  throw new InputError(kind, dataMessages.uncertaintyRelativeTemperature(spec.name, spec.text, unit.text), spec.where);
+}

@@ -8,12 +8,14 @@ import type { ReducedFile } from './reduce.js';
 /**
  * The CSV lines of one reduced file as UTF-8 bytes, in pieces of about `pieceBytes` (so that a
  * million rows never become one string). A value equal to the one above it reuses its text
- * (constant columns such as L/D).
+ * (constant columns such as L/D). With `uncertainty`, the u_ columns follow the values (0 where
+ * no input of an output has a stated uncertainty).
  * @example Buffer.concat([...csvRows(reduced)]).toString() // => 'loop-a.csv,8,0.0394,503.2,0.127\n...'
  */
-export function* csvRows(reduced: ReducedFile, pieceBytes = 1 << 20): Generator<Uint8Array> {
+export function* csvRows(reduced: ReducedFile, pieceBytes = 1 << 20, uncertainty = false): Generator<Uint8Array> {
   const fileCell = new TextEncoder().encode(csvCell(reduced.file) + ',');
-  const columns = reduced.values;
+  const zeros = uncertainty && reduced.uncertainties.some((u) => u === null) ? new Float64Array(reduced.rowCount) : null;
+  const columns = uncertainty ? [...reduced.values, ...reduced.uncertainties.map((u) => u ?? zeros!)] : reduced.values;
   const width = columns.length;
   const previous = new Float64Array(width).fill(NaN);
   const previousText: string[] = new Array<string>(width).fill('');

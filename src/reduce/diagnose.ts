@@ -1,21 +1,26 @@
 import type { ExprNode, Formula } from '../expr/index.js';
-import { BUILTIN_FUNCTIONS, childrenOf, evaluateNode, nodeText, type FunctionTable } from '../expr/index.js';
+import { childrenOf, evaluateNode, nodeText, type FunctionTable } from '../expr/index.js';
+import { explainPropertyFailures, PROPERTY_FUNCTIONS } from '../properties/index.js';
 
 /**
  * Why a formula gave a non-finite value at one row, in words: the innermost operation whose
  * result is not finite although its operands are (IEEE 754: x/0 is infinite, 0/0 and ln of a
- * negative number are NaN). Runs only for the rows that need an explanation.
+ * negative number are NaN), or a fluid property called outside its stated range (its reason
+ * from explainPropertyFailures, naming the argument and the range). Runs only for the rows that
+ * need an explanation.
  */
 
 /**
  * The cause of a non-finite value, or undefined when every operation is finite (cannot happen
  * for a non-finite result).
  * @example explainNonFinite(parseFormula('rho*U*D/mu'), (n) => (n === 'mu' ? 0 : 1)) // => 'division by zero: mu is 0'
+ * @example explainNonFinite(parseFormula('water_viscosity(T)', { functions: PROPERTY_FUNCTIONS }), () => 260)
+ * // => 'water_viscosity: T = 260 K (-13.15 degC) is below 273.15 K (0 degC), the lower end of IAPWS-IF97 region 1: ...'
  */
 export function explainNonFinite(
   formula: Formula,
   valueOf: (name: string) => number | undefined,
-  functions: FunctionTable = BUILTIN_FUNCTIONS,
+  functions: FunctionTable = PROPERTY_FUNCTIONS,
 ): string | undefined {
   const value = (node: ExprNode): number => evaluateNode(node, valueOf, functions);
   const text = (node: ExprNode): string => nodeText(formula, node) || '(expression)';
@@ -36,6 +41,9 @@ export function explainNonFinite(
       return `overflow in ${text(node)}`;
     }
     if (node.type === 'call') {
+      // Its arguments are finite here (the walk looks at children first): a property outside its range?
+      const failures = explainPropertyFailures({ text: formula.text, root: node }, valueOf, functions);
+      if (failures.length > 0) return failures.map((f) => f.message).join('; ');
       const args = node.args.map(value);
       const a = args[0] ?? NaN;
       if ((node.fn === 'ln' || node.fn === 'log10') && a <= 0) return `${node.fn} of ${a === 0 ? 'zero' : `a negative number`}: ${text(node.args[0]!)} is ${a}`;

@@ -6,7 +6,9 @@
  *                                                        dimensionless: before any row is read)
  *   RigTable + plan --reduceTable-->   ReducedFile     (compiled formulas over whole columns;
  *                                                        missing, non-finite and where exclusions)
- *   ReducedFile     --csvRows / jsonRows--> output     (file, line, outputs in study order)
+ *                                                        + uncertainties: u_c per kept row, budgets,
+ *                                                        Monte Carlo check (uncertainty-plan.ts, propagate.ts)
+ *   ReducedFile     --csvRows / jsonRows--> output     (file, line, outputs in study order, then u_ columns)
  */
 export { REDUCE_ERROR } from './kinds.js';
 export { reduceMessages } from './messages.js';
@@ -18,5 +20,15 @@ export { groupAdvice } from './advice.js';
 export { explainNonFinite } from './diagnose.js';
 export { reduceTable, type ExcludedRow, type ExclusionCause, type ReducedFile } from './reduce.js';
 export { poolReduced, type PooledTable } from './pool.js';
-export { commonOutputs, csvHeader, jsonRows } from './output.js';
+export { poolUncertainties } from './pool-uncertainty.js';
+export { checkTemperatureArguments, scaleOf, type NamedScale, type TemperatureScale } from './temperature-arguments.js';
+export {
+  planUncertainty,
+  type MonteCarloRequest,
+  type OutputPropagation,
+  type StatedUncertainty,
+  type UncertaintyPlan,
+} from './uncertainty-plan.js';
+export { budgetOf, propagateRows, type InputShare, type KeptRows, type MonteCarloCheck, type OutputBudget, type RowUncertainties } from './propagate.js';
+export { commonOutputs, csvHeader, jsonRows, uncertaintyColumns, uncertaintyName } from './output.js';
 export { csvCell, csvRows } from './csv-text.js';

@@ -10,4 +10,8 @@ export const REDUCE_ERROR = {
   nothing: 'reduce-nothing',
   /** A derived quantity or group that is a condition, not a number. */
   notANumber: 'reduce-not-a-number',
+  /** A temperature difference (delta_degC, or T_out - T_in) given to a fluid property, which needs an absolute temperature. */
+  temperatureDifference: 'reduce-temperature-difference',
+  /** A Monte Carlo check asked with fewer than 100 draws per row, or a seed that is not an integer. */
+  monteCarlo: 'reduce-monte-carlo',
 } as const;

@@ -26,4 +26,19 @@ export const reduceMessages = {
     `fit.model ${model} is ${dim}, but the response ${response} is ${responseDim}: both sides must have the same dimension`,
   uncertaintyName: (name: string, file: string, known: string) =>
     `uncertainty.${name} names no column or constant of ${file}: the names are ${known}`,
+  temperatureDifference: (call: string, argument: string, why: string) =>
+    `${call} needs an absolute temperature, but ${argument} is a temperature difference (${why}): ` +
+    'the dimension check cannot tell the two apart, the unit can; log the temperature in degC, degF or K, or add the difference to a reference temperature',
+  uncertaintyOverridden: (name: string, fileText: string, studyText: string, studyWhere: string) =>
+    `u(${name}) = ${fileText} in this file overrides the study's uncertainty ${name}: ${studyText}${studyWhere}`,
+  monteCarloSamples: (n: number, min: number) =>
+    `--monte-carlo ${String(n)}: the Monte Carlo check needs a whole number of at least ${min} draws per row (JCGM 101:2008 suggests 10^4 or more)`,
+  monteCarloSeed: (seed: number) => `the Monte Carlo seed ${String(seed)} is not a whole number`,
+  monteCarloUnused: (file: string) =>
+    `${file}: no uncertainty is stated (no # u(...) lines, no uncertainty section in the study), so there is nothing for the Monte Carlo check to check`,
+  uncertaintyColumnClash: (name: string, output: string) =>
+    `the output ${name} has the name of the uncertainty column of ${output} (u_${output}): rename it, since the reduced table gives u_${output} beside ${output}`,
+  uncertaintyNotStated: (file: string, others: string) =>
+    `${file} states no uncertainty for any input (no # u(...) lines, and the study's uncertainty section names none of its names), ` +
+    `while ${others} does: its u_ columns are 0, which treats its inputs as exact`,
 } as const;

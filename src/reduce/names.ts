@@ -1,6 +1,6 @@
 import { InputError, type SourceSpan, type WarningSink } from '../common/errors.js';
 import type { RigHead, Study } from '../data/index.js';
-import type { Dimension } from '../units/index.js';
+import type { Dimension, Unit } from '../units/index.js';
 import { REDUCE_ERROR } from './kinds.js';
 import { reduceMessages } from './messages.js';
 
@@ -22,6 +22,8 @@ export interface NameInfo {
   readonly valueSI?: number;
   /** 'dp [kPa]', 'D = 0.5 in' for messages. */
   readonly label: string;
+  /** The unit a column was logged in or a constant written in (data names only): says whether a temperature is absolute or a difference. */
+  readonly unit?: Unit;
   readonly where: SourceSpan;
 }
 
@@ -36,10 +38,10 @@ export function dataNames(study: Study, head: RigHead, sink: WarningSink): Map<s
   const names = new Map<string, NameInfo>();
   for (const c of head.columns) {
     const label = c.hasUnit ? `${c.name} [${c.unit.text}]` : c.name;
-    names.set(c.name, { name: c.name, kind: 'column', dimension: c.unit.dimension, label, where: c.where });
+    names.set(c.name, { name: c.name, kind: 'column', dimension: c.unit.dimension, label, where: c.where, unit: c.unit });
   }
   for (const k of head.constants) {
-    names.set(k.name, { name: k.name, kind: 'file-constant', dimension: k.unit.dimension, valueSI: k.valueSI, label: `${k.name} = ${k.text}`, where: k.where });
+    names.set(k.name, { name: k.name, kind: 'file-constant', dimension: k.unit.dimension, valueSI: k.valueSI, label: `${k.name} = ${k.text}`, where: k.where, unit: k.unit });
   }
   for (const k of study.constants) {
     const existing = names.get(k.name);
@@ -56,7 +58,7 @@ export function dataNames(study: Study, head: RigHead, sink: WarningSink): Map<s
       }
       continue;
     }
-    names.set(k.name, { name: k.name, kind: 'study-constant', dimension: k.unit.dimension, valueSI: k.valueSI, label: `${k.name} = ${k.text}`, where: k.where });
+    names.set(k.name, { name: k.name, kind: 'study-constant', dimension: k.unit.dimension, valueSI: k.valueSI, label: `${k.name} = ${k.text}`, where: k.where, unit: k.unit });
   }
   for (const [role, items] of [['derived quantity', study.derived], ['group', study.groups]] as const) {
     for (const item of items) {

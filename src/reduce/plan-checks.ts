@@ -1,6 +1,7 @@
 import { InputError } from '../common/errors.js';
-import { checkUncertaintyDimension, DATA_ERROR, placeInside, type LocatedFormula, type RigHead, type Study } from '../data/index.js';
-import { inferDimension } from '../expr/index.js';
+import { checkRelativeTemperature, checkUncertaintyDimension, DATA_ERROR, placeInside, type LocatedFormula, type RigHead, type Study } from '../data/index.js';
+import { inferDimension, type FunctionTable } from '../expr/index.js';
+import { PROPERTY_FUNCTIONS } from '../properties/index.js';
 import { describeDimension, Dimension } from '../units/index.js';
 import { reduceMessages } from './messages.js';
 import type { NameInfo } from './names.js';
@@ -17,7 +18,12 @@ import type { NameInfo } from './names.js';
  * @throws {InputError} 'study-fit', formula kinds placed in the study file.
  * @example checkFitNames(study, names, dimensionOf) // passes for response f, model C*Re^a
  */
-export function checkFitNames(study: Study, names: ReadonlyMap<string, NameInfo>, dimensionOf: (name: string) => Dimension | undefined): void {
+export function checkFitNames(
+  study: Study,
+  names: ReadonlyMap<string, NameInfo>,
+  dimensionOf: (name: string) => Dimension | undefined,
+  functions: FunctionTable = PROPERTY_FUNCTIONS,
+): void {
   const fit = study.fit;
   if (fit === null) return;
   const known = [...names.keys()];
@@ -32,18 +38,18 @@ export function checkFitNames(study: Study, names: ReadonlyMap<string, NameInfo>
   const lookup = (name: string) => (params.has(name) ? Dimension.NONE : dimensionOf(name));
   const knownNames = [...params, ...known];
   if (fit.model !== null) {
-    const d = inferPlaced(fit.model, lookup, knownNames);
+    const d = inferPlaced(fit.model, lookup, knownNames, functions);
     if (responseDimension !== undefined && !d.equals(responseDimension)) {
       const message = reduceMessages.fitDimension(fit.model.formula.text, describeDimension(d), fit.response!.value, describeDimension(responseDimension));
       throw new InputError(DATA_ERROR.studyFit, message, fit.model.where);
     }
   }
-  if (fit.weights.kind === 'formula') inferPlaced(fit.weights.formula, lookup, knownNames);
+  if (fit.weights.kind === 'formula') inferPlaced(fit.weights.formula, lookup, knownNames, functions);
 }
 
-function inferPlaced(at: LocatedFormula, lookup: (name: string) => Dimension | undefined, knownNames: readonly string[]): Dimension {
+function inferPlaced(at: LocatedFormula, lookup: (name: string) => Dimension | undefined, knownNames: readonly string[], functions: FunctionTable): Dimension {
   try {
-    return inferDimension(at.formula, lookup, undefined, { knownNames }).dimension;
+    return inferDimension(at.formula, lookup, functions, { knownNames }).dimension;
   } catch (e) {
     if (e instanceof InputError) throw placeInside(e, at.where, at.columnsExact);
     throw e;
@@ -51,8 +57,9 @@ function inferPlaced(at: LocatedFormula, lookup: (name: string) => Dimension | u
 }
 
 /**
- * The study's uncertainties: each must name a column or constant of the file, and an absolute
- * part must be in a unit of the same kind.
+ * The study's uncertainties: each must name a column or constant of the file, an absolute part
+ * must be in a unit of the same kind, and a percentage may not apply to a temperature logged in
+ * degC or degF (see checkRelativeTemperature).
  * @throws {InputError} 'study-uncertainty' at the study line.
  * @example checkStudyUncertainties(study, head, names) // passes for dp: 0.5 % + 0.02 kPa
  */
@@ -64,5 +71,6 @@ export function checkStudyUncertainties(study: Study, head: RigHead, names: Read
       throw new InputError(DATA_ERROR.studyUncertainty, reduceMessages.uncertaintyName(spec.name, head.file, known.join(', ')), spec.where);
     }
     checkUncertaintyDimension(spec, n.dimension, DATA_ERROR.studyUncertainty);
+    if (n.unit !== undefined) checkRelativeTemperature(spec, n.unit, DATA_ERROR.studyUncertainty);
   }
 }

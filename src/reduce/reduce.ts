@@ -1,10 +1,11 @@
-import { InputError } from '../common/errors.js';
+import { IGNORE_WARNINGS, InputError, type WarningSink } from '../common/errors.js';
 import { placeInside, type RigTable } from '../data/index.js';
-import { BUILTIN_FUNCTIONS, compileFormula, namesIn, type Formula, type FunctionTable } from '../expr/index.js';
+import { compileFormula, namesIn, type Formula, type FunctionTable } from '../expr/index.js';
 import { explainNonFinite } from './diagnose.js';
 import { REDUCE_ERROR } from './kinds.js';
 import { reduceMessages } from './messages.js';
 import type { OutputColumn, ReductionPlan } from './plan.js';
+import { propagateRows, type MonteCarloCheck, type OutputBudget } from './propagate.js';
 
 /**
  * One file reduced: each formula compiled once and evaluated over whole columns (never row by
@@ -12,7 +13,9 @@ import type { OutputColumn, ReductionPlan } from './plan.js';
  *   1. a column the reduction uses has no value in the row ("missing value in column dp ('NA')");
  *   2. a derived quantity or group is not finite in the row (the cause found by explainNonFinite);
  *   3. the where condition is false.
- * Kept rows keep their file line; excluded rows are listed, never dropped silently.
+ * Kept rows keep their file line; excluded rows are listed, never dropped silently. When the
+ * study or the file states uncertainties, each output's combined standard uncertainty is then
+ * computed for the kept rows (propagate.ts), with its budget and, on request, a Monte Carlo check.
  */
 
 export type ExclusionCause = 'missing' | 'non-finite' | 'where';
@@ -37,17 +40,32 @@ export interface ReducedFile {
   readonly values: readonly Float64Array[];
   /** In line order. */
   readonly excluded: readonly ExcludedRow[];
+  /**
+   * Combined standard uncertainty of each output (same order as `outputs`), kept rows only, SI;
+   * null where no input of that output has a stated uncertainty (its inputs are taken as exact).
+   */
+  readonly uncertainties: readonly (Float64Array | null)[];
+  /** Uncertainty budget of each output with an uncertain input (which input dominates, median shares). */
+  readonly budgets: readonly OutputBudget[];
+  /** The Monte Carlo check of each such output, when it was asked for (PlanOptions.monteCarlo); else null. */
+  readonly monteCarlo: readonly MonteCarloCheck[] | null;
 }
 
 /** At most this many rows per formula get a worded cause; later ones a shorter reason. */
 const EXPLAINED_ROWS = 10_000;
 
 /**
- * Computes a plan over a table.
+ * Computes a plan over a table. `functions` defaults to the plan's; `sink` receives the Monte
+ * Carlo warnings ('uncertainty-nonlinear', 'uncertainty-invalid-draws').
  * @throws {InputError} 'reduce-text-column' when a formula uses a column that turned out to hold labels.
  * @example reduceTable(table, plan).values[0] // => the first output (e.g. U in m/s) for every kept row
  */
-export function reduceTable(table: RigTable, plan: ReductionPlan, functions: FunctionTable = BUILTIN_FUNCTIONS): ReducedFile {
+export function reduceTable(
+  table: RigTable,
+  plan: ReductionPlan,
+  functions: FunctionTable = plan.functions,
+  sink: WarningSink = IGNORE_WARNINGS,
+): ReducedFile {
   const n = table.rowCount;
   const file = table.head.file;
   const vectors = new Map<string, Float64Array>();
@@ -74,7 +92,46 @@ export function reduceTable(table: RigTable, plan: ReductionPlan, functions: Fun
     const keep = evaluate(plan.where.formula, n, vectors, plan.constants, functions);
     for (let i = 0; i < n; i++) if (keep[i] === 0 && marks.cause[i] === 0) marks.add(i, CAUSE.where);
   }
-  return assemble(table, plan, vectors, marks);
+  return withUncertainties(assemble(table, plan, vectors, marks), plan, vectors, marks, functions, sink);
+}
+
+/** The reduced file with the uncertainties of its kept rows (propagate.ts), or nulls when none is stated. */
+function withUncertainties(
+  reduced: Assembled,
+  plan: ReductionPlan,
+  vectors: ReadonlyMap<string, Float64Array>,
+  marks: Exclusions,
+  functions: FunctionTable,
+  sink: WarningSink,
+): ReducedFile {
+  if (plan.uncertainty === null) return { ...reduced, uncertainties: plan.outputs.map(() => null), budgets: [], monteCarlo: null };
+  const kept = keptRows(marks);
+  const picked = new Map<string, Float64Array>();
+  const column = (name: string): Float64Array => {
+    if (kept === null) return vectors.get(name)!;
+    const known = picked.get(name);
+    if (known !== undefined) return known;
+    const values = pick(vectors.get(name)!, kept);
+    picked.set(name, values);
+    return values;
+  };
+  const rows = { n: reduced.rowCount, column, constants: plan.constants, label: (i: number) => `${reduced.file} line ${reduced.lines[i]!}` };
+  return { ...reduced, ...propagateRows(plan.uncertainty, rows, functions, sink) };
+}
+
+/** The indices of the kept rows, or null when every row is kept. */
+function keptRows(marks: Exclusions): Uint32Array | null {
+  if (marks.count === 0) return null;
+  const kept = new Uint32Array(marks.cause.length - marks.count);
+  let k = 0;
+  for (let i = 0; i < marks.cause.length; i++) if (marks.cause[i] === CAUSE.none) kept[k++] = i;
+  return kept;
+}
+
+function pick(column: Float64Array, rows: Uint32Array): Float64Array {
+  const out = new Float64Array(rows.length);
+  for (let k = 0; k < rows.length; k++) out[k] = column[rows[k]!]!;
+  return out;
 }
 
 function evaluate(formula: Formula, n: number, vectors: ReadonlyMap<string, Float64Array>, constants: ReadonlyMap<string, number>, functions: FunctionTable): Float64Array {
@@ -117,7 +174,9 @@ class Exclusions {
   }
 }
 
-function assemble(table: RigTable, plan: ReductionPlan, vectors: ReadonlyMap<string, Float64Array>, marks: Exclusions): ReducedFile {
+type Assembled = Omit<ReducedFile, 'uncertainties' | 'budgets' | 'monteCarlo'>;
+
+function assemble(table: RigTable, plan: ReductionPlan, vectors: ReadonlyMap<string, Float64Array>, marks: Exclusions): Assembled {
   const n = table.rowCount;
   const file = table.head.file;
   const full = plan.outputs.map((o) => vectors.get(o.name)!);

@@ -39,11 +39,11 @@ const folder = tmpFolder({ 'runs/loop-a.csv': LOOP_A, 'runs/loop-b.csv': LOOP_B,
 afterAll(() => folder.remove());
 
 describe('similis reduce', () => {
-  it('writes CSV to stdout: file, line, U [m s^-1], Re, f; the excluded row goes to stderr as a warning', async () => {
+  it('writes CSV to stdout: file, line, U [m s^-1], Re, f, then the u_ columns (loop-a states u(dp)); the excluded row goes to stderr as a warning', async () => {
     const r = await folder.run('reduce', 'runs/loop-a.csv', '--study', 'study.yaml');
     expect(r.code).toBe(EXIT.ok);
     const lines = r.out.trimEnd().split('\n');
-    expect(lines[0]).toBe('file,line,U [m s^-1],Re,f');
+    expect(lines[0]).toBe('file,line,U [m s^-1],Re,f,u_U [m s^-1],u_Re,u_f');
     expect(lines.map((l) => l.split(',').slice(0, 2).join(','))).toEqual(['file,line', 'runs/loop-a.csv,6', 'runs/loop-a.csv,8']);
     // U = 4Q/(pi D^2): 0.3 L/min through 0.5 in = 0.0394705... m/s (in = 0.0254 m, L = 1e-3 m^3; SP 811 B.9).
     expect(Number(lines[1]!.split(',')[2])).toBeCloseTo((4 * 0.3e-3) / 60 / (Math.PI * 0.0127 ** 2), 15);
@@ -75,8 +75,10 @@ describe('similis reduce', () => {
     ]);
     expect(doc.excluded).toEqual([{ file: 'runs/loop-a.csv', line: 7, reason: "missing value in column dp ('NA')" }]);
     // gal/min: the unit engine says which gallon it assumed (US liquid gallon), at the header cell.
+    // loop-a states u(dp), loop-b nothing: loop-b's u_ columns are 0, which is said.
     expect(doc.warnings.map((w) => [w.code, w.file, w.line])).toEqual([
       ['unit-assumed-convention', 'runs/loop-b.csv', 3],
+      ['uncertainty-not-stated', 'runs/loop-b.csv', undefined],
       ['rows-excluded', 'runs/loop-a.csv', undefined],
     ]);
     expect(doc.columns.map((c) => [c.name, c.unit])).toEqual([
@@ -110,7 +112,7 @@ describe('similis reduce', () => {
   it('--strict makes excluded rows exit 1 (after writing the output)', async () => {
     const r = await folder.run('reduce', 'runs/loop-a.csv', '--study', 'study.yaml', '--strict', '-o', 'strict.csv');
     expect(r.code).toBe(EXIT.warningsAsErrors);
-    expect(readFileSync(folder.path('strict.csv'), 'utf8').split('\n')[0]).toBe('file,line,U [m s^-1],Re,f');
+    expect(readFileSync(folder.path('strict.csv'), 'utf8').split('\n')[0]).toBe('file,line,U [m s^-1],Re,f,u_U [m s^-1],u_Re,u_f');
   });
   it('a file constant overriding a study constant is reported with both values', async () => {
     const r = await folder.run('reduce', 'runs/loop-a.csv', '--study', 'study.yaml', '--const', 'D=12 mm', '--json');

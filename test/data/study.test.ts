@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { WarningList } from '../../src/common/errors.js';
-import { applyStudyFlags, emptyStudy, loadStudy, whereFlag } from '../../src/data/index.js';
+import { applyStudyFlags, emptyStudy, loadStudy, parseRigText, whereFlag } from '../../src/data/index.js';
+import { BUILTIN_FUNCTIONS } from '../../src/expr/index.js';
 import { inputError } from './helpers.js';
 
 const STUDY = `title: Mini loop, tube A
@@ -154,5 +155,32 @@ describe('applyStudyFlags', () => {
   it('whereFlag parses the condition and places errors after "--where "', () => {
     expect(whereFlag('Re > 4000').formula.text).toBe('Re > 4000');
     expect(inputError(() => whereFlag('Re >> 4000')).where.column).toBe(13);
+  });
+});
+
+describe('loadStudy, applyStudyFlags, whereFlag and parseRigText with a function table', () => {
+  it('study formulas may call the fluid properties by default (PROPERTY_FUNCTIONS), in every section and flag', () => {
+    const s = loadStudy('derived:\n  rho: water_density(T)\n  mu: water_viscosity(T, p)\nfit:\n  where: air_density(T, p) > 0\n', 'study.yaml');
+    expect(s.derived.map((d) => d.formula.text)).toEqual(['water_density(T)', 'water_viscosity(T, p)']);
+    expect(applyStudyFlags(emptyStudy(), { derive: ['nu=water_kinematic_viscosity(T)'] }, new WarningList()).derived[0]!.formula.text).toBe('water_kinematic_viscosity(T)');
+    expect(whereFlag('water_density(T) > 990').formula.text).toBe('water_density(T) > 990');
+  });
+  it('with the built-in table only, a property call is an unknown function (formula-function), at its column in the file', () => {
+    const e = inputError(() => loadStudy('derived:\n  rho: water_density(T)\n', 'study.yaml', new WarningList(), BUILTIN_FUNCTIONS));
+    expect(e.kind).toBe('formula-function');
+    expect(e.where).toMatchObject({ file: 'study.yaml', line: 2, column: 8 });
+  });
+  it('a name of the active table is refused for a study constant, a derived quantity, a column and a --const; with the built-in table it is allowed', () => {
+    expect(inputError(() => loadStudy('derived:\n  water_density: 1000*x\n', 'study.yaml')).kind).toBe('formula-reserved-name');
+    expect(inputError(() => parseRigText('air_density [kg/m^3]\n1.2\n', { file: 'a.csv' })).message).toContain('air_density');
+    expect(inputError(() => applyStudyFlags(emptyStudy(), { constants: ['water_viscosity=1 mPa*s'] }, new WarningList())).kind).toBe('formula-reserved-name');
+    expect(parseRigText('air_density [kg/m^3]\n1.2\n', { file: 'a.csv', functions: BUILTIN_FUNCTIONS }).columns[0]!.head.name).toBe('air_density');
+  });
+});
+
+describe('loadStudy: fit.weights', () => {
+  it("reads 'none', 'uncertainty' and 'relative' as kinds, anything else as a formula", () => {
+    const kind = (w: string) => loadStudy(`groups:\n  Re: rho*U*D/mu\nfit:\n  weights: ${w}\n`, 'study.yaml').fit!.weights.kind;
+    expect(['none', 'uncertainty', 'relative', '1/Re'].map(kind)).toEqual(['none', 'uncertainty', 'relative', 'formula']);
   });
 });

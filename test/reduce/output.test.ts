@@ -29,6 +29,9 @@ describe('csvRows', () => {
           outputs,
           values: [Float64Array.from(pairs, (p) => p[0]), Float64Array.from(pairs, (p) => p[1])],
           excluded: [],
+          uncertainties: [null, null],
+          budgets: [],
+          monteCarlo: null,
         };
         const lines = Buffer.concat([...csvRows(reduced, 64)]).toString('utf8').trimEnd().split('\n');
         lines.forEach((line, i) => {

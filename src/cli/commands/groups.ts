@@ -11,6 +11,7 @@ import {
   type VariableInput,
 } from '../../dimensional/index.js';
 import { checkUserName } from '../../expr/index.js';
+import { PROPERTY_FUNCTIONS } from '../../properties/index.js';
 import { parseUnit } from '../../units/index.js';
 import type { CommandContext, CommandOutcome } from '../context.js';
 import { formatTable } from '../format.js';
@@ -153,7 +154,8 @@ function parseVarArgument(ctx: CommandContext, arg: string): ShownVariable {
   const eq = arg.indexOf('=');
   if (eq <= 0) throw new InputError('usage', `expected ${VAR_FORM}, found '${arg}'`, where(1, arg.length + 1));
   const name = arg.slice(0, eq).trim();
-  checkUserName(name, where(1, eq + 1));
+  // A study may call the fluid properties: a variable may not take one of their names.
+  checkUserName(name, where(1, eq + 1), PROPERTY_FUNCTIONS);
   const rest = arg.slice(eq + 1);
   const colon = rest.lastIndexOf(':');
   const unitText = colon < 0 ? rest : rest.slice(0, colon);
