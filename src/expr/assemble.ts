@@ -7,6 +7,9 @@
  *   prepareJacobian(): columns only the Jacobian needs (ln of data bases), computed on first use
  *   evaluate(P, out):     parameter locals, per-call code, one loop over the rows
  *   jacobian(P, out, J):  the same with derivatives, J column-major (J[j*n + i])
+ *   jacobianRows(P, from, to, out, at, J, ld): rows from..to-1 only, values at out[at + r] and
+ *                         derivatives at J[j*ld + r] (r = i - from): a block of rows that a
+ *                         caller consumes while it is in cache (the fit's row-block QR)
  *
  * Every function re-declares the slots it reads as locals, so that the row loops read locals only.
  */
@@ -35,6 +38,7 @@ export interface SourceParts {
 const range = (k: number, f: (i: number) => string) => Array.from({ length: k }, (_, i) => f(i));
 const decl = (items: string[]) => (items.length > 0 ? `const ${items.join(', ')};` : '');
 const loop = (lines: readonly string[]) => ['for (let i = 0; i < n; i++) {', ...lines.map((l) => `  ${l}`), '}'];
+const rowLoop = (lines: readonly string[]) => ['for (let i = from, r = 0; i < to; i++, r++) {', ...lines.map((l) => `  ${l}`), '}'];
 
 /** The factory body as one string. */
 export function assembleSource(p: SourceParts): string {
@@ -43,13 +47,28 @@ export function assembleSource(p: SourceParts): string {
   const store = (v: string) => (p.boolean ? `out[i] = ${v} ? 1 : 0;` : `out[i] = ${v};`);
   const zeroColumns: string[] = [];
   const jacobianStores: string[] = [];
+  const rowZeroColumns: string[] = [];
+  const rowStores: string[] = [];
   if (p.jacobianRoot !== undefined) {
     jacobianStores.push(store(p.jacobianRoot.value));
+    rowStores.push(`out[at + r] = ${p.jacobianRoot.value};`);
     p.jacobianRoot.tangents.forEach((t, j) => {
-      if (t === undefined) zeroColumns.push(`J.fill(0, ${j} * n, ${j + 1} * n);`);
-      else jacobianStores.push(`J[${j} * n + i] = ${t};`);
+      if (t === undefined) {
+        zeroColumns.push(`J.fill(0, ${j} * n, ${j + 1} * n);`);
+        rowZeroColumns.push(`J.fill(0, ${j} * ld, ${j} * ld + to - from);`);
+      } else {
+        jacobianStores.push(`J[${j} * n + i] = ${t};`);
+        rowStores.push(`J[${j} * ld + r] = ${t};`);
+      }
     });
   }
+  const jacobianHead = [
+    'if (!jacobianReady) prepareJacobian();',
+    ...bound,
+    decl(range(p.jacobianColumns, (k) => `g${k} = G[${k}]`)),
+    params,
+    ...p.jacobianPre,
+  ];
   return [
     '"use strict";',
     decl(range(p.vectors, (k) => `v${k} = V[${k}]`)),
@@ -76,15 +95,16 @@ export function assembleSource(p: SourceParts): string {
     'return out;',
     '}',
     'function jacobian(P, out, J) {',
-    'if (!jacobianReady) prepareJacobian();',
-    ...bound,
-    decl(range(p.jacobianColumns, (k) => `g${k} = G[${k}]`)),
-    params,
-    ...p.jacobianPre,
+    ...jacobianHead,
     ...zeroColumns,
     ...(p.jacobianRoot === undefined ? [] : loop([...p.jacobianLoop, ...jacobianStores])),
     '}',
-    'return { evaluate, jacobian };',
+    'function jacobianRows(P, from, to, out, at, J, ld) {',
+    ...jacobianHead,
+    ...rowZeroColumns,
+    ...(p.jacobianRoot === undefined ? [] : rowLoop([...p.jacobianLoop, ...rowStores])),
+    '}',
+    'return { evaluate, jacobian, jacobianRows };',
   ]
     .filter((l) => l !== '')
     .join('\n');

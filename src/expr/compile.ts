@@ -43,6 +43,14 @@ export interface BoundFormula {
    * @throws {InputError} 'formula-not-differentiable' for a true/false formula. @throws {RangeError} on wrong lengths.
    */
   evaluateWithJacobian(params: ArrayLike<number>, out: Float64Array, jac: Float64Array): void;
+  /**
+   * Values and Jacobian of rows from..to-1 only, for a caller that works through the rows in
+   * blocks: the value of row i goes to out[at + i - from], d f_i / d param_j to
+   * jac[j*ld + i - from]. The same generated loop as evaluateWithJacobian (bit-identical values).
+   * @throws {InputError} 'formula-not-differentiable' for a true/false formula.
+   * @throws {RangeError} for a row range outside 0..n or buffers too short for it.
+   */
+  evaluateRowsWithJacobian(params: ArrayLike<number>, from: number, to: number, out: Float64Array, at: number, jac: Float64Array, ld: number): void;
 }
 
 export interface CompiledFormula {
@@ -67,7 +75,11 @@ type Factory = (
   S: Float64Array,
   F: readonly ((...a: number[]) => number)[],
   n: number,
-) => { evaluate(P: ArrayLike<number>, out: Float64Array): Float64Array; jacobian(P: ArrayLike<number>, out: Float64Array, J: Float64Array): void };
+) => {
+  evaluate(P: ArrayLike<number>, out: Float64Array): Float64Array;
+  jacobian(P: ArrayLike<number>, out: Float64Array, J: Float64Array): void;
+  jacobianRows(P: ArrayLike<number>, from: number, to: number, out: Float64Array, at: number, J: Float64Array, ld: number): void;
+};
 
 /**
  * Compiles a formula over a layout of names.
@@ -160,6 +172,7 @@ function bindFormula(
   const checkParams = (params: ArrayLike<number>) => {
     if (params.length !== p) throw new RangeError(`evaluate: expected ${p} parameters, got ${params.length}`);
   };
+  const notDifferentiable = () => formulaError(FORMULA_ERROR.notDifferentiable, msg.notDifferentiable(formula.text), formula.text, formula.root.span);
   return {
     n,
     evaluate(params, out = new Float64Array(n)) {
@@ -168,13 +181,31 @@ function bindFormula(
       return instance.evaluate(params, out);
     },
     evaluateWithJacobian(params, out, jac) {
-      if (kind === 'boolean') {
-        throw formulaError(FORMULA_ERROR.notDifferentiable, msg.notDifferentiable(formula.text), formula.text, formula.root.span);
-      }
+      if (kind === 'boolean') throw notDifferentiable();
       checkParams(params);
       if (out.length !== n) throw new RangeError(`evaluateWithJacobian: out has ${out.length} rows, expected ${n}`);
       if (jac.length !== n * p) throw new RangeError(`evaluateWithJacobian: jac has ${jac.length} entries, expected ${n * p}`);
       instance.jacobian(params, out, jac);
     },
+    evaluateRowsWithJacobian(params, from, to, out, at, jac, ld) {
+      if (kind === 'boolean') throw notDifferentiable();
+      checkParams(params);
+      checkRowBlock(n, p, from, to, out, at, jac, ld);
+      instance.jacobianRows(params, from, to, out, at, jac, ld);
+    },
   };
+}
+
+/** The sizes of a row block (evaluateRowsWithJacobian): rows inside 0..n, buffers long enough. */
+function checkRowBlock(n: number, p: number, from: number, to: number, out: Float64Array, at: number, jac: Float64Array, ld: number): void {
+  const rows = to - from;
+  if (!(Number.isSafeInteger(from) && Number.isSafeInteger(to) && 0 <= from && from <= to && to <= n)) {
+    throw new RangeError(`evaluateRowsWithJacobian: bad row range [${from}, ${to}) for ${n} rows`);
+  }
+  if (!(Number.isSafeInteger(at) && at >= 0 && at + rows <= out.length)) {
+    throw new RangeError(`evaluateRowsWithJacobian: out has ${out.length} entries, ${rows} needed from ${at}`);
+  }
+  if (!(Number.isSafeInteger(ld) && ld >= rows && (p === 0 || (p - 1) * ld + rows <= jac.length))) {
+    throw new RangeError(`evaluateRowsWithJacobian: jac has ${jac.length} entries, too few for ${p} columns of ${rows} rows at stride ${ld}`);
+  }
 }

@@ -21,7 +21,7 @@ import type { PreparedFit } from './prepare.js';
 import { ROWS_IN_MESSAGES } from './prepare.js';
 import { jacobianRankError, logRankError } from './rank.js';
 import type { FitInput, FitResult, FlaggedPoint, GroupRange, ParameterEstimate, PointDiagnostics, RobustSummary } from './types.js';
-import { expOf, squareOf } from './vector.js';
+import { differenceOf, expOf, squareOf } from './vector.js';
 
 /** Equilibrated condition number above which the parameters are reported as nearly redundant. */
 export const ILL_CONDITIONED = 1e8;
@@ -133,10 +133,9 @@ function pointsOf(prepared: PreparedFit, solved: Solved, inf: ParameterInference
   const sol = solved.solution;
   const n = sol.n;
   const robustWeights = solved.robust?.robustWeights;
-  const m = pointMeasures(sol, inf.factor, inf.variance, inf.n, robustWeights);
+  const residual = sol.residual ?? differenceOf(sol.y, sol.fitted);
+  const m = pointMeasures(sol, inf.factor, residual, inf.variance, inf.n, robustWeights);
   const fitted = logSpace ? expOf(sol.fitted) : sol.fitted;
-  const residual = new Float64Array(n);
-  for (let i = 0; i < n; i++) residual[i] = sol.y[i]! - sol.fitted[i]!;
   const sw = sol.sqrtWeights;
   const weight = sw === undefined ? new Float64Array(n).fill(1) : squareOf(sw);
   return { y: prepared.y, fitted, residual, relativeDeviation: new Float64Array(n), weight, ...m };

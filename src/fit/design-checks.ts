@@ -9,7 +9,7 @@ import { columnScale, designDiagnostics, designFromFactor } from './design.js';
 import type { Solved } from './fit-correlation.js';
 import { FIT_WARNING, msg } from './messages.js';
 import type { DesignDiagnostics } from './types.js';
-import { allPositive, logOf } from './vector.js';
+import { allPositive } from './vector.js';
 
 /**
  * Design diagnostics of the groups a fit used, with warnings 'group-constant' and 'groups-collinear'.
@@ -42,12 +42,19 @@ export function designChecks(groups: readonly { name: string; values: Float64Arr
   return findings.diagnostics;
 }
 
-/** Findings in `space`, reusing the log-space fit's own factor when it is the plain design. */
+/**
+ * Findings in `space`, reusing a factor of the plain log design when the fit made one: the
+ * log-space fit's own, or the log-space start's of a power law fitted in linear space.
+ */
 function findingsFor(groups: readonly { name: string; values: Float64Array }[], solved: Solved, space: 'log' | 'linear', n: number): DesignFindings {
   const names = groups.map((g) => g.name);
   const d = solved.logDesign;
   const sol = solved.solution;
   const signs = solved.powerProduct?.powers.map((f) => f.sign);
+  const fromStart = solved.logDesignFactor;
+  if (fromStart !== undefined && signs !== undefined && space === 'log') {
+    return unsign(designFromFactor(fromStart.factor, groups.length, names, 'log', n, fromStart.columnScales), signs);
+  }
   if (d !== undefined && signs !== undefined && space === 'log') {
     const offset = d.hasCoefficient ? 1 : 0;
     const columns = groups.map((_, k) => d.x.subarray((k + offset) * n, (k + offset + 1) * n));
@@ -57,8 +64,7 @@ function findingsFor(groups: readonly { name: string; values: Float64Array }[], 
       : designDiagnostics(columns.map((values, k) => ({ name: names[k]!, values })), n, 'log');
     return unsign(findings, signs);
   }
-  const values = groups.map((g) => (space === 'log' ? logOf(g.values) : g.values));
-  return designDiagnostics(values.map((v, k) => ({ name: names[k]!, values: v })), n, space);
+  return designDiagnostics(groups, n, space, space === 'log');
 }
 
 /** The log design holds s_k ln x_k: undo the signs in the correlations. */

@@ -12,7 +12,7 @@
  * Diagnostics (1980), ch. 3).
  */
 import { analyseFactor } from './linalg/factor-analysis.js';
-import { RowAccumulator } from './linalg/row-accumulator.js';
+import { BLOCK_ROWS, RowAccumulator } from './linalg/row-accumulator.js';
 import type { DesignDiagnostics } from './types.js';
 
 /** VIF above which two groups are reported as hard to tell apart. */
@@ -23,7 +23,7 @@ export const CONSTANT_RELATIVE = 1e-9;
 
 export interface GroupColumn {
   readonly name: string;
-  /** Values in the space of the analysis (already logarithms for 'log'). */
+  /** Values in the space of the analysis (already logarithms for 'log'), or linear values for designDiagnostics' takeLog. */
   readonly values: Float64Array;
 }
 
@@ -118,19 +118,38 @@ export function designFromFactor(
 }
 
 /**
- * Diagnostics of group columns given as values (one Givens pass over [1 | G]).
+ * Diagnostics of group columns given as values: one blocked Householder pass over [1 | G], the
+ * blocks filled straight from the columns (with the logarithms taken there when `takeLog`), so
+ * that no n x (k+1) matrix and no column of logarithms is ever stored.
+ * @param takeLog the values are linear and the analysis is of their logarithms (space 'log').
  * @example
  * // Re and L/D varied independently -> VIFs near 1; L/D = 0.01 * Re in every row -> VIF Infinity.
  */
-export function designDiagnostics(groups: readonly GroupColumn[], n: number, space: 'log' | 'linear'): DesignFindings {
+export function designDiagnostics(groups: readonly GroupColumn[], n: number, space: 'log' | 'linear', takeLog = false): DesignFindings {
   const k = groups.length;
-  const x = new Float64Array(n * (k + 1));
-  x.fill(1, 0, n);
-  groups.forEach((g, j) => x.set(g.values, (j + 1) * n));
   const acc = new RowAccumulator(k + 1);
-  acc.addRows(x, n, new Float64Array(n));
-  const scale = Float64Array.from(groups, (g) => columnScale(g.values));
+  const blk = acc.block;
+  const squares = new Float64Array(k);
+  for (let start = 0; start < n; start += BLOCK_ROWS) {
+    const m = Math.min(BLOCK_ROWS, n - start);
+    blk.fill(1, 0, m);
+    blk.fill(0, (k + 1) * BLOCK_ROWS, (k + 1) * BLOCK_ROWS + m);
+    groups.forEach((g, j) => (squares[j] = squares[j]! + loadGroup(g.values, start, m, takeLog, blk, (j + 1) * BLOCK_ROWS)));
+    acc.addBlock(m);
+  }
+  const scale = squares.map(Math.sqrt);
   return designFromFactor(acc.r, k, groups.map((g) => g.name), space, n, scale);
+}
+
+/** Copies m values (or their logarithms) into blk[off ..]; returns their sum of squares. */
+function loadGroup(values: Float64Array, start: number, m: number, takeLog: boolean, blk: Float64Array, off: number): number {
+  let s = 0;
+  for (let r = 0; r < m; r++) {
+    const v = takeLog ? Math.log(values[start + r]!) : values[start + r]!;
+    blk[off + r] = v;
+    s += v * v;
+  }
+  return s;
 }
 
 /** Root-sum-of-squares of a column, without spreading a huge array into Math.hypot. */

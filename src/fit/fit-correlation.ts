@@ -19,6 +19,8 @@ import { assembleResult } from './assemble.js';
 import type { DataContext } from './evaluate-free.js';
 import type { LogDesign } from './log-linear.js';
 import { buildLogDesign, isNonPositive, nonPositiveError, powerPieces, solveLogLinear } from './log-linear.js';
+import type { LogStart } from './log-start.js';
+import { logSpaceStart } from './log-start.js';
 import { FIT_ERROR, FIT_WARNING, methodReason, msg } from './messages.js';
 import type { NonlinearSetup } from './nonlinear.js';
 import { setUpNonlinear, solveMultiStart, solveNonlinear } from './nonlinear.js';
@@ -49,6 +51,8 @@ export interface Solved {
   readonly bases: readonly Float64Array[] | undefined;
   readonly robust: RobustOutcome | undefined;
   readonly multiStart: MultiStartSummary | undefined;
+  /** The factor of the unweighted log design [1 | ln groups] from the log-space start, for the design checks. */
+  readonly logDesignFactor: LogStart['design'];
 }
 
 /**
@@ -107,6 +111,7 @@ function solve(input: FitInput, prepared: PreparedFit, ctx: DataContext, options
       bases: d.bases,
       robust,
       multiStart: undefined,
+      logDesignFactor: undefined,
     };
   }
   return solveInLinearSpace(input, prepared, ctx, options, pp, reason, sqrtW);
@@ -121,12 +126,17 @@ function solveInLinearSpace(
   reason: string,
   sqrtW: Float64Array | undefined,
 ): Solved {
-  const bases = pp === undefined ? undefined : powerPieces(pp, ctx).bases;
+  const pieces = pp === undefined ? undefined : powerPieces(pp, ctx);
+  const bases = pieces?.bases;
   const positive = bases !== undefined && bases.every(allPositive);
   // A power product with positive bases compiles as C*exp(a*ln(x)+...): one exp per row.
   const formula = pp !== undefined && positive ? expForm(pp, ctx.functions) : input.model;
   const setup = setUpNonlinear(formula, ctx, prepared.vectorNames, prepared.scalarNames, prepared.paramNames);
-  const start = startValues(input, prepared, ctx, options, pp, sqrtW);
+  const logStart =
+    options.powerLawStart === 'log-fit' && pp !== undefined && pieces !== undefined
+      ? logSpaceStart(pp, pieces.bases, pieces.known, prepared.y, sqrtW, prepared.paramNames, prepared.start)
+      : undefined;
+  const start = logStart?.start ?? prepared.start;
   const { y, label } = prepared;
   let solution: FitSpaceSolution;
   let multiStart: MultiStartSummary | undefined;
@@ -149,29 +159,8 @@ function solveInLinearSpace(
     bases,
     robust,
     multiStart,
+    logDesignFactor: logStart?.design,
   };
-}
-
-/** The given start, or for a power law with powerLawStart 'log-fit' the log-space solution. */
-function startValues(
-  input: FitInput,
-  prepared: PreparedFit,
-  ctx: DataContext,
-  options: ResolvedFitOptions,
-  pp: PowerProduct | undefined,
-  sqrtW: Float64Array | undefined,
-): Float64Array {
-  if (options.powerLawStart !== 'log-fit' || pp === undefined) return prepared.start;
-  const d = buildLogDesign(pp, ctx, prepared.y, input.response, prepared.paramNames, prepared.label);
-  if (isNonPositive(d)) return prepared.start;
-  const sol = solveLogLinear(d, sqrtW);
-  if (!sol.status.converged) return prepared.start;
-  const start = Float64Array.from(prepared.start);
-  d.order.forEach((paramIndex, k) => {
-    const isCoefficient = d.hasCoefficient && k === 0;
-    start[paramIndex] = isCoefficient ? Math.exp(sol.theta[k]!) : sol.theta[k]!;
-  });
-  return start;
 }
 
 function maybeRobust(

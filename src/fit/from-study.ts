@@ -1,6 +1,8 @@
 import { InputError, type SourceSpan } from '../common/errors.js';
 import type { FitSpec } from '../data/index.js';
-import { evaluateConstant, parseFormula, type Formula, type FunctionTable } from '../expr/index.js';
+import { compileFormula, evaluateConstant, namesIn, parseFormula, type Formula, type FunctionTable } from '../expr/index.js';
+import { detectPowerProduct } from './power-product.js';
+import { relativeWeights, weightsFromUncertainty } from './weights.js';
 import type { FitInput, FitMethodRequest, RobustMethod, RowSource } from './types.js';
 
 /**
@@ -22,7 +24,12 @@ export interface FitColumns {
   readonly n: number;
   readonly columns: ReadonlyMap<string, Float64Array>;
   readonly rowSource: RowSource;
+  /** Propagated standard uncertainties by output name (for `weights: uncertainty`). */
+  readonly uncertainties?: ReadonlyMap<string, Float64Array>;
 }
+
+/** How the fit input was weighted, for the scatter test after the fit. */
+export type WeightingUsed = 'none' | 'uncertainty' | 'relative' | 'formula';
 
 const METHODS: readonly FitMethodRequest[] = ['auto', 'log-linear', 'nonlinear'];
 const CMD: SourceSpan = { file: 'command line' };
@@ -46,6 +53,7 @@ export function fitInputFromStudy(spec: FitSpec | null, overrides: FitOverrides,
   const parameters = parameterStarts(spec, overrides, model);
   const method = methodOf(spec, overrides);
   const robust = robustOf(spec, overrides);
+  const weights = weightsOf(spec, data, response, model, parameters, method, functions);
   return {
     n: data.n,
     columns: data.columns,
@@ -54,9 +62,57 @@ export function fitInputFromStudy(spec: FitSpec | null, overrides: FitOverrides,
     model,
     parameters,
     method,
+    ...(weights === undefined ? {} : { weights }),
     ...(robust === undefined ? {} : { robust }),
     ...(functions === undefined ? {} : { functions }),
   };
+}
+
+/** Which weighting the study asks for ('none' without a study). */
+export function weightingOf(spec: FitSpec | null): WeightingUsed {
+  return spec?.weights.kind ?? 'none';
+}
+
+/**
+ * Row weights: from the response's propagated uncertainty (1/u^2, or (y/u)^2 when the fit is a
+ * power product on ln y), relative (1/y^2), or a formula of the study's names.
+ * @throws {InputError} 'fit-spec' for weights: uncertainty when no uncertainty reaches the response.
+ */
+function weightsOf(
+  spec: FitSpec | null,
+  data: FitColumns,
+  response: string,
+  model: Formula,
+  parameters: ReadonlyMap<string, number>,
+  method: FitMethodRequest,
+  functions: FunctionTable | undefined,
+): Float64Array | undefined {
+  if (spec === null) return undefined;
+  const w = spec.weights;
+  const y = data.columns.get(response)!;
+  switch (w.kind) {
+    case 'none':
+      return undefined;
+    case 'relative':
+      return relativeWeights(y);
+    case 'uncertainty': {
+      const u = data.uncertainties?.get(response);
+      if (u === undefined) {
+        throw new InputError('fit-spec', `weights: uncertainty, but no stated uncertainty reaches ${response}: give u(...) for the instruments (# u(dp) = 0.5 % in the CSV, or uncertainty: in the study)`, w.where);
+      }
+      const logSpace = method === 'log-linear' || (method === 'auto' && detectPowerProduct(model, new Set(parameters.keys())) !== undefined && y.every((v) => v > 0));
+      return weightsFromUncertainty(y, u, logSpace ? 'log' : 'linear');
+    }
+    case 'formula': {
+      const names = [...namesIn(w.formula.formula)].filter((n) => data.columns.has(n));
+      const bound = compileFormula(w.formula.formula, { vectors: names, scalars: [], params: [] }, functions).bind({
+        n: data.n,
+        vectors: new Map(names.map((n) => [n, data.columns.get(n)!])),
+        scalars: new Map(),
+      });
+      return bound.evaluate([]);
+    }
+  }
 }
 
 function modelFormula(spec: FitSpec | null, overrides: FitOverrides, functions: FunctionTable | undefined): Formula {

@@ -41,6 +41,7 @@ export { fitRegimes, REGIME_ERROR, REGIME_WARNING, type RegimeFit, type RegimeSp
 export { findBreakpoint, type BreakpointInput, type BreakpointResult, type SegmentLaw } from './breakpoint.js';
 export { flagWords, POINT_FLAG } from './diagnostics.js';
 export { detectPowerProduct, expForm, type PowerProduct } from './power-product.js';
+export { logSpaceStart, type LogStart } from './log-start.js';
 export { linearLeastSquares, type LinearFit, type LinearOptions } from './linear-least-squares.js';
 export { levenbergMarquardt, type LmModel, type LmOutcome } from './levenberg-marquardt.js';
 export { LM_DEFAULTS, LM_STATUS, resolveLmOptions, type LmOptions, type LmStatus, type ResolvedLmOptions } from './lm-types.js';

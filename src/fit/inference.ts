@@ -8,7 +8,7 @@
  * the same formulas are exact (Draper & Smith, Applied Regression Analysis, 3rd ed. (1998), ch. 5).
  */
 import type { FactorAnalysis } from './linalg/factor-analysis.js';
-import { analyseFactor, triangularFactor } from './linalg/factor-analysis.js';
+import { analyseFactor } from './linalg/factor-analysis.js';
 import { tQuantile, tTwoSidedP } from './distributions.js';
 import type { FitSpaceSolution } from './solution.js';
 import { effectiveRows } from './solution.js';
@@ -42,10 +42,10 @@ export interface ParameterInference {
  * // interval [1.0012433657, 1.0029902703] (check-values.md 4.2).
  */
 export function inferParameters(sol: FitSpaceSolution, level: number): ParameterInference {
-  const { n, p } = sol;
+  const { p } = sol;
   const nEff = effectiveRows(sol);
   const dof = nEff - p;
-  const factor = sol.factor ?? triangularFactor(sol.jacobian, n, p, sol.sqrtWeights);
+  const factor = sol.factor;
   const analysis = analyseFactor(factor, p, nEff);
   const variance = dof > 0 ? sol.rss / dof : NaN;
   const covariance = new Float64Array(p * p).fill(NaN);

@@ -4,8 +4,9 @@
  * implementation and theory", Springer LNM 630:105-116; Moré, Garbow & Hillstrom,
  * User Guide for MINPACK-1, Argonne ANL-80-74, 1980):
  *
- *   - once per iteration, the QR factor of the weighted Jacobian (one pass of Givens rotations
- *     over the rows, then a pivoted QR of the p x p factor), never J^T J;
+ *   - once per point, the QR factor of the weighted Jacobian (one pass of blocked Householder
+ *     reflections over the rows, fused with the evaluation of the model: lm-pieces.ts), then a
+ *     pivoted QR of the p x p factor per iteration, never J^T J;
  *   - the step from `lmParameter` on that small system, with Moré's scaling D = running maximum
  *     of the Jacobian's column norms, so that the damping respects each parameter's scale and
  *     can go to zero (a pure Gauss-Newton step) when that step is inside the trust region;
@@ -20,14 +21,28 @@
  *     uncertainty, sqrt(||Q1^T f||^2 / p) / sqrt(||Q2^T f||^2 / (n - p)), is below offsetTol.
  *     It stops when more digits would mean nothing statistically, and it is free: both norms
  *     come out of the row rotations.
+ *
+ * Every trial point is evaluated together with its Jacobian and factor (one pass over the rows):
+ * an accepted step (the usual case) then needs no further pass, and the tests at the new point
+ * (relative offset, gradient) read a factor that is already there. A rejected trial costs one
+ * more pass, to restore the model values of the current point.
  */
 import type { LmStatus, ResolvedLmOptions } from './lm-types.js';
 import { LM_STATUS } from './lm-types.js';
 import { RowAccumulator } from './linalg/row-accumulator.js';
 import { applyQt, euclideanNorm, householderQr } from './linalg/householder.js';
 import { LmWorkspace, lmParameter } from './linalg/lm-parameter.js';
-import type { LmModel, PointBuffers } from './lm-pieces.js';
-import { allFinite, buffers, evaluateAt, relativeOffset, relativeReduction, scaledGradient, stoppingTest } from './lm-pieces.js';
+import type { LmModel, PassSums } from './lm-pieces.js';
+import {
+  allFinite,
+  evaluateAndFactor,
+  evaluateValues,
+  relativeOffset,
+  relativeReduction,
+  residualNorm,
+  scaledGradient,
+  stoppingTest,
+} from './lm-pieces.js';
 
 export type { LmModel } from './lm-pieces.js';
 
@@ -35,19 +50,16 @@ export interface LmOutcome {
   readonly params: Float64Array;
   /** Model values at the solution. */
   readonly fitted: Float64Array;
-  /** Jacobian of the model (unweighted), column-major n x p, at the solution. */
-  readonly jacobian: Float64Array;
   /** sum w_i (m_i - y_i)^2 at the solution. */
   readonly rss: number;
-  /** R with R^T R = J^T W J at the solution, when the last factorisation was there (saves a pass). */
-  readonly factor: Float64Array | undefined;
+  /** R with R^T R = J^T W J at the solution (column-major p x p, parameter order). */
+  readonly factor: Float64Array;
   readonly status: LmStatus;
-  /** Jacobian evaluations (outer iterations). */
+  /** Jacobian evaluations at accepted points (outer iterations). */
   readonly iterations: number;
-  /** Model evaluations, including the start and rejected trials. */
+  /** Model evaluations (passes over the rows with the Jacobian), including the start and rejected trials. */
   readonly evaluations: number;
 }
-
 
 /**
  * Runs Levenberg-Marquardt from `start`.
@@ -81,6 +93,7 @@ export function levenbergMarquardt(
       const t = run.tryStep(qr, iteration === 1);
       const accepted = t.ratio >= 1e-4;
       if (accepted) run.accept(t.fnorm1);
+      else run.reject();
       const status = stoppingTest(t.actred, t.prered, t.ratio, run.delta, run.xnorm, gnorm, options);
       if (status !== undefined) return run.outcome(status, iteration);
       if ((iteration >= options.maxIterations && accepted) || run.evaluations >= options.maxEvaluations) {
@@ -106,7 +119,7 @@ interface TrialGain {
   readonly ratio: number;
 }
 
-/** The state of one run: current point and its buffers, trust region, scaling, counters. */
+/** The state of one run: current point, its values and factor, trust region, scaling, counters. */
 class LmRun {
   readonly n: number;
   readonly p: number;
@@ -117,10 +130,12 @@ class LmRun {
   evaluations = 1;
   readonly acnorm: Float64Array;
   private lambda = 0;
-  private current: PointBuffers;
-  private trial: PointBuffers;
-  private factorAtX = false;
-  private readonly acc: RowAccumulator;
+  /** Model values at x (during a trial pass: at the trial point, until accept or reject). */
+  private readonly values: Float64Array;
+  /** The factor of [W^(1/2) J | W^(1/2) f] at x, and the one of the last trial point. */
+  private acc: RowAccumulator;
+  private trialAcc: RowAccumulator;
+  private readonly sums: PassSums = { sumSquares: 0, cross: 0 };
   private readonly ws: LmWorkspace;
   private readonly diag: Float64Array;
   private readonly step: Float64Array;
@@ -138,9 +153,9 @@ class LmRun {
     this.n = y.length;
     const p = (this.p = start.length);
     this.x = Float64Array.from(start);
-    this.current = buffers(this.n, p);
-    this.trial = buffers(this.n, p);
+    this.values = new Float64Array(this.n);
     this.acc = new RowAccumulator(p);
+    this.trialAcc = new RowAccumulator(p);
     this.ws = new LmWorkspace(p);
     this.diag = new Float64Array(p);
     this.acnorm = new Float64Array(p);
@@ -148,29 +163,26 @@ class LmRun {
     this.xTrial = new Float64Array(p);
     this.scaled = new Float64Array(p);
     this.rStep = new Float64Array(p);
-    this.fnorm = evaluateAt(model, this.x, y, sw, this.current);
+    evaluateAndFactor(model, this.x, y, sw, this.values, this.acc, this.sums);
+    this.fnorm = residualNorm(this.sums.sumSquares, this.values, y, sw);
   }
 
   outcome(status: LmStatus, iterations: number): LmOutcome {
     return {
       params: this.x,
-      fitted: this.current.values,
-      jacobian: this.current.jac,
+      fitted: this.values,
       rss: this.fnorm * this.fnorm,
-      factor: this.factorAtX ? this.acc.r.slice() : undefined,
+      factor: this.acc.r.slice(),
       status,
       iterations,
       evaluations: this.evaluations,
     };
   }
 
-  /** QR of the weighted Jacobian: one blocked pass over the rows, then pivoted QR of the p x p factor. */
+  /** Pivoted QR of the p x p factor at x (the rows were triangularised when x was evaluated). */
   factorise(): IterationFactor | undefined {
     const { acc, p } = this;
-    acc.reset();
-    acc.addRows(this.current.jac, this.n, this.current.f, this.sw);
     if (!allFinite(acc.r) || !allFinite(acc.qtb)) return undefined;
-    this.factorAtX = true;
     for (let j = 0; j < p; j++) this.acnorm[j] = euclideanNorm(acc.r, j * p, j + 1);
     const qr = householderQr(acc.r, p, p, true);
     return { r: qr.r, perm: qr.perm, qtf: applyQt(qr, acc.qtb.slice()) };
@@ -193,7 +205,7 @@ class LmRun {
     for (let j = 0; j < this.p; j++) this.diag[j] = Math.max(this.diag[j]!, this.acnorm[j]!);
   }
 
-  /** Computes a step in the current region, evaluates it, and updates the region (MINPACK lmder). */
+  /** Computes a step in the current region, evaluates it (with its factor), and updates the region (MINPACK lmder). */
   tryStep(qr: IterationFactor, first: boolean): TrialGain {
     const { p, step, fnorm } = this;
     this.lambda = lmParameter(qr.r, qr.perm, this.diag, qr.qtf, this.delta, this.lambda, step, this.ws);
@@ -201,9 +213,10 @@ class LmRun {
     const pnorm = this.scaledNorm(step);
     if (first) this.delta = Math.min(this.delta, pnorm);
     this.evaluations++;
-    let fnorm1 = evaluateAt(this.model, this.xTrial, this.y, this.sw, this.trial);
+    evaluateAndFactor(this.model, this.xTrial, this.y, this.sw, this.values, this.trialAcc, this.sums);
+    let fnorm1 = residualNorm(this.sums.sumSquares, this.values, this.y, this.sw);
     if (!Number.isFinite(fnorm1)) fnorm1 = Infinity;
-    const actred = 0.1 * fnorm1 < fnorm ? relativeReduction(this.current.f, this.trial.f, this.sw, fnorm) : -1;
+    const actred = 0.1 * fnorm1 < fnorm ? relativeReduction(this.sums.cross, fnorm) : -1;
     // Predicted reduction of the linear model: R P^T step, and the damping term.
     const rStep = this.rStep.fill(0);
     for (let j = 0; j < p; j++) {
@@ -227,13 +240,17 @@ class LmRun {
     return { fnorm1, actred, prered, ratio };
   }
 
-  /** Moves to the trial point (its values and Jacobian are already computed). */
+  /** Moves to the trial point (its values and factor were computed by its pass). */
   accept(fnorm1: number): void {
-    this.factorAtX = false;
     this.x.set(this.xTrial);
-    [this.current, this.trial] = [this.trial, this.current];
+    [this.acc, this.trialAcc] = [this.trialAcc, this.acc];
     this.xnorm = this.scaledNorm(this.x);
     this.fnorm = fnorm1;
+  }
+
+  /** Stays at x: its values are restored (the trial pass wrote over them); its factor was kept. */
+  reject(): void {
+    evaluateValues(this.model, this.x, this.values, this.trialAcc.block);
   }
 
   private scaledNorm(v: Float64Array): number {
@@ -241,4 +258,3 @@ class LmRun {
     return euclideanNorm(this.scaled);
   }
 }
-

@@ -13,7 +13,8 @@ import type { PowerProduct } from './power-product.js';
 import { knownPartFormula } from './power-product.js';
 import { badRows } from './prepare.js';
 import type { FitSpaceSolution } from './solution.js';
-import { addScaled, logOf } from './vector.js';
+import { storedJacobianRows } from './solution.js';
+import { addScaled, allPositive, logOf } from './vector.js';
 
 export interface LogDesign {
   readonly n: number;
@@ -66,9 +67,8 @@ export function buildLogDesign(
     ['the known factor', known],
   ];
   for (const [what, values] of checks) {
-    if (values === undefined) continue;
-    const rows = badRows(n, (i) => !(values[i]! > 0), label);
-    if (rows !== undefined) return { what, rows };
+    if (values === undefined || allPositive(values)) continue;
+    return { what, rows: badRows(n, (i) => !(values[i]! > 0), label)! };
   }
   const hasCoefficient = pp.coefficient !== undefined;
   const p = pp.powers.length + (hasCoefficient ? 1 : 0);
@@ -118,7 +118,8 @@ export function solveLogLinear(d: LogDesign, sqrtWeights: Float64Array | undefin
     theta: fit.coefficients,
     y: lnY,
     fitted,
-    jacobian: x,
+    residual: fit.residuals,
+    jacobianRows: storedJacobianRows(x, n, p),
     sqrtWeights,
     rss: fit.rss,
     factor: fit.factor,

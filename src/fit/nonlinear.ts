@@ -8,12 +8,13 @@ import type { BoundFormula, CompiledFormula, Formula, FormulaLayout, FunctionTab
 import { compileFormula } from '../expr/index.js';
 import type { DataContext } from './evaluate-free.js';
 import { levenbergMarquardt } from './levenberg-marquardt.js';
-import type { LmOutcome } from './levenberg-marquardt.js';
+import type { LmModel, LmOutcome } from './levenberg-marquardt.js';
 import { LM_STATUS } from './lm-types.js';
 import type { ResolvedLmOptions } from './lm-types.js';
 import { FIT_ERROR, msg } from './messages.js';
 import { badRows } from './prepare.js';
 import type { FitSpaceSolution } from './solution.js';
+import { modelJacobianRows } from './solution.js';
 import type { MultiStartSummary } from './types.js';
 
 export interface NonlinearSetup {
@@ -77,20 +78,20 @@ export function solveNonlinear(
 ): FitSpaceSolution {
   const outcome = levenbergMarquardt(setup.bound, y, sqrtWeights, start, lm);
   if (outcome.status === LM_STATUS.startNotFinite) throw startError(setup, start, label);
-  return toSolution(outcome, y, sqrtWeights, start.length);
+  return toSolution(outcome, setup.bound, y, sqrtWeights, start.length);
 }
 
-function toSolution(o: LmOutcome, y: Float64Array, sqrtWeights: Float64Array | undefined, p: number): FitSpaceSolution {
+function toSolution(o: LmOutcome, model: LmModel, y: Float64Array, sqrtWeights: Float64Array | undefined, p: number): FitSpaceSolution {
   return {
     n: y.length,
     p,
     theta: o.params,
     y,
     fitted: o.fitted,
-    jacobian: o.jacobian,
+    jacobianRows: modelJacobianRows(model, o.params),
     sqrtWeights,
     rss: o.rss,
-    ...(o.factor === undefined ? {} : { factor: o.factor }),
+    factor: o.factor,
     status: o.status,
     iterations: o.iterations,
     evaluations: o.evaluations,
@@ -151,7 +152,7 @@ export function solveMultiStart(
   multiStarts(start, extra).forEach((s, index) => {
     if (index === 0) return;
     const o = levenbergMarquardt(setup.bound, y, sqrtWeights, s, lm);
-    if (o.status !== LM_STATUS.startNotFinite) runs.push({ solution: toSolution(o, y, sqrtWeights, start.length), index });
+    if (o.status !== LM_STATUS.startNotFinite) runs.push({ solution: toSolution(o, setup.bound, y, sqrtWeights, start.length), index });
   });
   const converged = runs.filter((r) => r.solution.status.converged);
   const pool = converged.length > 0 ? converged : runs;

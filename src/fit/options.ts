@@ -16,7 +16,8 @@ export interface ResolvedFitOptions {
 }
 
 /**
- * Defaults: the solver's (lm-types.ts LM_DEFAULTS), no multi-start, start from the given values,
+ * Defaults: the solver's (lm-types.ts LM_DEFAULTS), no multi-start, a power product fitted in
+ * linear space starts from its log-space fit (log-start.ts; other models from the given values),
  * 50 robust passes, 95 % intervals.
  * @throws {InputError} 'fit-option' for a value out of range.
  * @example resolveFitOptions({}).level // => 0.95
@@ -38,5 +39,5 @@ export function resolveFitOptions(options: FitOptions = {}): ResolvedFitOptions 
   if (!(Number.isInteger(robustMaxIterations) && robustMaxIterations >= 1)) {
     throw new InputError(FIT_ERROR.option, `robustMaxIterations must be an integer >= 1, got ${robustMaxIterations}`);
   }
-  return Object.freeze({ lm, multiStart, powerLawStart: options.powerLawStart ?? 'given', robustMaxIterations, level });
+  return Object.freeze({ lm, multiStart, powerLawStart: options.powerLawStart ?? 'log-fit', robustMaxIterations, level });
 }

@@ -42,6 +42,12 @@ export function badRows(n: number, bad: (row: number) => boolean, label: (row: n
   return total === 0 ? undefined : listRows(labels, total);
 }
 
+/** Whether every value is finite: a plain loop, so that the per-row callback of badRows runs only for a message. */
+function allFinite(x: Float64Array): boolean {
+  for (let i = 0; i < x.length; i++) if (!Number.isFinite(x[i]!)) return false;
+  return true;
+}
+
 /**
  * Validates the request.
  * @throws {InputError} 'fit-missing-column', 'fit-nonfinite-data', 'fit-parameters',
@@ -56,8 +62,7 @@ export function prepareFit(input: FitInput): PreparedFit {
     const c = columns.get(name);
     if (c === undefined) throw new InputError(FIT_ERROR.missingColumn, msg.missingColumn(name, [...columns.keys()]));
     if (c.length !== n) throw new InputError(FIT_ERROR.missingColumn, msg.columnLength(name, c.length, n));
-    const rows = badRows(n, (i) => !Number.isFinite(c[i]!), label);
-    if (rows !== undefined) throw new InputError(FIT_ERROR.nonfiniteData, msg.nonfinite(name, rows));
+    if (!allFinite(c)) throw new InputError(FIT_ERROR.nonfiniteData, msg.nonfinite(name, badRows(n, (i) => !Number.isFinite(c[i]!), label)!));
     return c;
   };
   const y = column(input.response);

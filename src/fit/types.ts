@@ -23,7 +23,11 @@ export interface RowSource {
 export interface FitOptions extends LmOptions {
   /** Extra starting points for nonlinear fits (0: only the given start). Default 0. */
   readonly multiStart?: number;
-  /** Nonlinear power products: start from the given values or from the log-space fit. Default 'given'. */
+  /**
+   * Power products fitted in linear space: start from the log-space fit (when every value is
+   * positive and its design has full rank; else from the given values), or from the given values.
+   * Default 'log-fit'. Other models always start from the given values.
+   */
   readonly powerLawStart?: 'given' | 'log-fit';
   /** Most robust reweighting passes. Default 50. */
   readonly robustMaxIterations?: number;

@@ -46,6 +46,13 @@ export function addScaled(a: Float64Array, b: Float64Array, sign: number): Float
   return out;
 }
 
+/** a - b element-wise. @example differenceOf(Float64Array.of(3), Float64Array.of(1)) // => [2] */
+export function differenceOf(a: Float64Array, b: Float64Array): Float64Array {
+  const out = new Float64Array(a.length);
+  for (let i = 0; i < a.length; i++) out[i] = a[i]! - b[i]!;
+  return out;
+}
+
 /** a * b element-wise. @example multiplyEach(Float64Array.of(2), Float64Array.of(3)) // => [6] */
 export function multiplyEach(a: Float64Array, b: Float64Array): Float64Array {
   const out = new Float64Array(a.length);

@@ -121,6 +121,37 @@ describe('compileFormula: hoisting', () => {
   });
 });
 
+describe('BoundFormula.evaluateRowsWithJacobian (blocks of rows)', () => {
+  it('gives, block by block, the same rows as evaluateWithJacobian, bit for bit (property test, seeded)', () => {
+    const names = ['x', 'y', 'k', 'a', 'b'];
+    const layout = { vectors: ['x', 'y'], scalars: ['k'], params: ['a', 'b'] };
+    const n = 7;
+    // Blocks of 3, 3 and 1 rows, written at an offset of 2 and a column stride of 4 (a parameter
+    // that no Jacobian column uses must come out as zeros in the block, as in the full matrix).
+    const blocks = [[0, 3], [3, 6], [6, 7]] as const;
+    fc.assert(
+      fc.property(realTree(names, false), fc.array(fc.double({ min: 0.5, max: 2, noNaN: true }), { minLength: 2 * n + 3, maxLength: 2 * n + 3 }), (tree, v) => {
+        const formula = parseFormula(formatFormula(tree));
+        const inputs = { n, vectors: { x: Float64Array.from(v.slice(0, n)), y: Float64Array.from(v.slice(n, 2 * n)) }, scalars: { k: v[2 * n]! } };
+        const params = [v[2 * n + 1]!, v[2 * n + 2]!];
+        const bound = compileFormula(formula, layout).bind(inputs);
+        const [out, jac] = [new Float64Array(n), new Float64Array(2 * n)];
+        bound.evaluateWithJacobian(params, out, jac);
+        const same = (x: number, y: number) => Object.is(x, y) || (Number.isNaN(x) && Number.isNaN(y));
+        for (const [from, to] of blocks) {
+          const [bOut, bJac] = [new Float64Array(2 + 3).fill(NaN), new Float64Array(2 * 4).fill(99)];
+          bound.evaluateRowsWithJacobian(params, from, to, bOut, 2, bJac, 4);
+          for (let i = from; i < to; i++) {
+            expect(same(bOut[2 + i - from]!, out[i]!)).toBe(true);
+            for (let j = 0; j < 2; j++) expect(same(bJac[j * 4 + i - from]!, jac[j * n + i]!)).toBe(true);
+          }
+        }
+      }),
+      { seed: SEED, numRuns: 300 },
+    );
+  });
+});
+
 describe('compileFormula: against mathjs 15 as an independent evaluator', () => {
   // Tolerance: both evaluate the same operations in IEEE double precision, and mathjs calls the
   // same Math functions for numbers, so differences come only from a different order of the
@@ -205,9 +236,22 @@ describe('compileFormula and bind: refusals', () => {
     expect(() => b.evaluate([1], new Float64Array(3))).toThrow(RangeError);
     expect(() => b.evaluateWithJacobian([1], new Float64Array(2), new Float64Array(3))).toThrow(RangeError);
   });
+  it('evaluateRowsWithJacobian refuses a row range outside 0..n and buffers too short for the block', () => {
+    const b = bindColumns('a*x + b', { vectors: ['x'], scalars: [], params: ['a', 'b'] }, { x: [1, 2, 3] });
+    const [out, jac] = [new Float64Array(3), new Float64Array(6)];
+    expect(() => b.evaluateRowsWithJacobian([1, 2], 2, 4, out, 0, jac, 3)).toThrow(RangeError); // to > n
+    expect(() => b.evaluateRowsWithJacobian([1, 2], 2, 1, out, 0, jac, 3)).toThrow(RangeError); // from > to
+    expect(() => b.evaluateRowsWithJacobian([1, 2], 0, 3, out, 1, jac, 3)).toThrow(RangeError); // out too short from at = 1
+    expect(() => b.evaluateRowsWithJacobian([1, 2], 0, 3, out, 0, jac, 2)).toThrow(RangeError); // stride below the rows
+    expect(() => b.evaluateRowsWithJacobian([1, 2], 0, 3, out, 0, new Float64Array(5), 3)).toThrow(RangeError); // second column cut
+    expect(() => b.evaluateRowsWithJacobian([1], 0, 3, out, 0, jac, 3)).toThrow(RangeError); // one parameter short
+  });
   it('a Jacobian of a true/false formula is formula-not-differentiable', () => {
     const b = bindColumns('a*x > 1', { vectors: ['x'], scalars: [], params: ['a'] }, { x: [1, 2] });
     expect(() => b.evaluateWithJacobian([1], new Float64Array(2), new Float64Array(2))).toThrow(
+      expect.objectContaining({ kind: 'formula-not-differentiable' }),
+    );
+    expect(() => b.evaluateRowsWithJacobian([1], 0, 2, new Float64Array(2), 0, new Float64Array(2), 2)).toThrow(
       expect.objectContaining({ kind: 'formula-not-differentiable' }),
     );
   });

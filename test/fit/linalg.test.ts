@@ -9,7 +9,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { accurateDot } from '../../src/fit/linalg/accurate-dot.js';
 import { analyseFactor } from '../../src/fit/linalg/factor-analysis.js';
-import { RowAccumulator } from '../../src/fit/linalg/row-accumulator.js';
+import { BLOCK_ROWS, RowAccumulator } from '../../src/fit/linalg/row-accumulator.js';
 import { applyQ, applyQt, euclideanNorm, householderQr } from '../../src/fit/linalg/householder.js';
 import { jacobiSvd } from '../../src/fit/linalg/jacobi-svd.js';
 import { medianAbsolute } from '../../src/fit/robust.js';
@@ -129,6 +129,64 @@ describe('RowAccumulator (blocked Householder, sequential TSQR)', () => {
     let qq = 0;
     for (const v of acc.qtb) qq += v * v;
     expect(Math.abs(acc.residualSquares - (bb - qq))).toBeLessThanOrEqual(1e-10 * bb);
+  });
+});
+
+describe('RowAccumulator: the scaled reflector where squares overflow or underflow', () => {
+  // R of s*A is s*R of A for any scale s (Householder QR is scale-equivariant; GVL 5.2.2). With
+  // s = 1e200 the squared norms overflow and with s = 1e-200 they underflow (to 0 below 1e-162),
+  // so each block column goes through the scaled three-sweep reflector; (R/s)^T (R/s) must still
+  // equal A^T A within the backward-error bound of the test above.
+  for (const s of [1e200, 1e-200]) {
+    it(`R^T R equals A^T A for A scaled by ${s} (rel 100 * m * eps of the norms, after unscaling)`, () => {
+      fc.assert(
+        fc.property(shapes, ({ m, p, a }) => {
+          const acc = new RowAccumulator(p);
+          acc.addRows(a.map((v) => v * s), m, new Float64Array(m));
+          const scale = (maxAbs(a) || 1) ** 2 * m;
+          for (let i = 0; i < p; i++) {
+            for (let j = 0; j < p; j++) {
+              let rtr = 0;
+              let ata = 0;
+              for (let k = 0; k < p; k++) rtr += (acc.r[k + i * p]! / s) * (acc.r[k + j * p]! / s);
+              for (let k = 0; k < m; k++) ata += a[k + i * m]! * a[k + j * m]!;
+              expect(Math.abs(rtr - ata)).toBeLessThanOrEqual(100 * m * EPS * scale);
+            }
+          }
+        }),
+        { seed: SEED, numRuns: 100 },
+      );
+    });
+  }
+
+  it('a zero column leaves its row of R at zero, and a NaN in a row reaches R (so a caller can see it)', () => {
+    const a = Float64Array.of(1, 2, 3, 0, 0, 0, 4, 5, 7);
+    const acc = new RowAccumulator(3);
+    acc.addRows(a, 3, new Float64Array(3));
+    expect([acc.r[1 + 1 * 3], acc.r[1 + 2 * 3]]).toEqual([0, 0]);
+    const bad = new RowAccumulator(3);
+    bad.addRows(Float64Array.of(1, NaN, 3, 1, 1, 1, 4, 5, 7), 3, new Float64Array(3));
+    expect(bad.r.some(Number.isNaN)).toBe(true);
+  });
+
+  it('addBlock on rows written into the work block equals addRows on the same rows, bit for bit', () => {
+    const m = 700;
+    const p = 3;
+    const a = Float64Array.from({ length: m * p }, (_, k) => Math.sin(k * 0.71) * (1 + (k % 5)));
+    const b = Float64Array.from({ length: m }, (_, i) => Math.cos(i * 0.13));
+    const rows = new RowAccumulator(p);
+    rows.addRows(a, m, b);
+    const blocks = new RowAccumulator(p);
+    for (let start = 0; start < m; start += BLOCK_ROWS) {
+      const count = Math.min(BLOCK_ROWS, m - start);
+      for (let j = 0; j < p; j++) blocks.block.set(a.subarray(j * m + start, j * m + start + count), j * BLOCK_ROWS);
+      blocks.block.set(b.subarray(start, start + count), p * BLOCK_ROWS);
+      blocks.addBlock(count);
+    }
+    expect([...blocks.r]).toEqual([...rows.r]);
+    expect([...blocks.qtb]).toEqual([...rows.qtb]);
+    expect(blocks.residualSquares).toBe(rows.residualSquares);
+    expect(() => blocks.addBlock(BLOCK_ROWS + 1)).toThrow(RangeError);
   });
 });
 

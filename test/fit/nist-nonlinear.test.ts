@@ -37,7 +37,9 @@ function runProblem(name: string, start: 0 | 1): Row {
     columns.set('lny', pr.columns.get('y')!.map(Math.log));
   }
   const parameters = new Map(pr.params.map((b, j) => [b, pr.starts[start][j]!] as const));
-  const result = fitCorrelation({ n: pr.n, columns, response, model: parseFormula(pr.model), parameters, method: 'nonlinear' }, new WarningList());
+  // From the certified starting point itself, also for the power law DanWood (whose default start is its log-space fit).
+  const options = { powerLawStart: 'given' } as const;
+  const result = fitCorrelation({ n: pr.n, columns, response, model: parseFormula(pr.model), parameters, method: 'nonlinear', options }, new WarningList());
   const est = result.parameters;
   return {
     name,
