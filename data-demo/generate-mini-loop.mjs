@@ -1,6 +1,7 @@
 #!/usr/bin/env node
 /**
- * Generates the small invented example used by `similis demo` until the full demo campaigns exist.
+ * Generates the small invented example of the `fit` command's help and tests (the demo campaigns are
+ * written by generate-demo.mjs).
  * Nothing here was measured: it is a scenario we made up, written from a stated truth with seeded
  * noise, so that the tool's output can be compared with the truth.
  *

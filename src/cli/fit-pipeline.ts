@@ -8,7 +8,10 @@ import { compareRequests, runComparisons, type CompareRequest, type Comparison }
 import { readRigHead, type Delimiter, type LocatedFormula, type Study } from '../data/index.js';
 import { fitCorrelation, fitResultToJson, POINT_FLAG, type FitInput, type FitResult } from '../fit/index.js';
 import { fitInputFromStudy, type FitOverrides } from '../fit/from-study.js';
-import { commonOutputs, planReduction, poolReduced, type PooledTable, type ReducedFile } from '../reduce/index.js';
+import { commonOutputs, planReduction, poolReduced, type PooledTable, type ReducedFile, type ReductionPlan } from '../reduce/index.js';
+import { predictionRecipe, type RecipeInput, type RecipeSources, type RecipeStep } from '../predict/index.js';
+import { siUnitOf } from '../units/index.js';
+import { namesIn } from '../expr/index.js';
 import { buildReportModel } from '../report/build-model.js';
 import { renderReportHtml, type ReportComparison } from '../report/index.js';
 import type { CommandContext } from './context.js';
@@ -25,6 +28,11 @@ import { AtomicFile } from './write-atomic.js';
  * forms, and render NAME.json, NAME.csv and NAME.html as text, committed together or not at all.
  */
 
+/** A pooled table that also says how its groups were computed (for the JSON's predict section). */
+export interface PooledInputs extends PooledTable {
+  readonly recipeSources?: RecipeSources;
+}
+
 /** Reads every file's head against the study (before any row), then streams and reduces each file. */
 export async function reduceInputs(
   ctx: CommandContext,
@@ -32,7 +40,7 @@ export async function reduceInputs(
   study: Study,
   where: LocatedFormula | undefined,
   delimiter: Delimiter | undefined,
-): Promise<{ reduced: ReducedFile[]; pooled: PooledTable }> {
+): Promise<{ reduced: ReducedFile[]; pooled: PooledInputs; plans: ReductionPlan[] }> {
   const plans = [];
   for (const f of files) {
     const head = await readRigHead(fileChunks(f.path), { file: f.label, ...(delimiter === undefined ? {} : { delimiter }), sink: ctx.warnings });
@@ -45,13 +53,63 @@ export async function reduceInputs(
     warnExclusions(ctx, r);
     reduced.push(r);
   }
-  return { reduced, pooled: poolReduced(reduced, outputs) };
+  return { reduced, pooled: { ...poolReduced(reduced, outputs), recipeSources: recipeSourcesOf(study, plans.map(fileRecipeInfo)) }, plans };
+}
+
+/** What one file's plan says about the names its groups are computed from (plain data, for workers). */
+export interface FileRecipeInfo {
+  readonly file: string;
+  readonly steps: readonly RecipeStep[];
+  readonly names: readonly { readonly name: string; readonly kind: string; readonly siUnit: string; readonly valueSI?: number }[];
+}
+
+/** The steps of a plan and the data names they use, as plain data. */
+export function fileRecipeInfo(plan: ReductionPlan): FileRecipeInfo {
+  const steps = plan.steps.map((s) => ({ name: s.name, role: s.role, formula: s.definition.formula.text, siUnit: siUnitOf(s.dimension) }));
+  const stepNames = new Set(steps.map((s) => s.name));
+  const used = new Set<string>();
+  for (const s of plan.steps) for (const name of namesIn(s.definition.formula)) if (!stepNames.has(name)) used.add(name);
+  const names = [];
+  for (const name of used) {
+    const info = plan.names.get(name);
+    if (info === undefined || info.dimension === null) continue;
+    names.push({ name, kind: info.kind, siUnit: siUnitOf(info.dimension), ...(info.valueSI === undefined ? {} : { valueSI: info.valueSI }) });
+  }
+  return { file: plan.file, steps, names };
+}
+
+/**
+ * How the groups are computed from measured quantities, for `similis predict`: the study's steps
+ * in evaluation order, its constants, and every column or file constant the steps use (a file
+ * constant with its value in each file).
+ */
+export function recipeSourcesOf(study: Study, infos: readonly FileRecipeInfo[]): RecipeSources {
+  const steps = infos[0]?.steps ?? [];
+  const order: string[] = [];
+  for (const info of infos) for (const n of info.names) if (!order.includes(n.name)) order.push(n.name);
+  const inputs: RecipeInput[] = [];
+  for (const name of order) {
+    const known = infos.flatMap((info) => info.names.filter((n) => n.name === name).map((n) => ({ file: info.file, ...n })));
+    if (known.length === 0 || known.every((x) => x.kind === 'study-constant')) continue;
+    const siUnit = known[0]!.siUnit;
+    if (known.some((x) => x.kind === 'column')) inputs.push({ name, kind: 'column', siUnit });
+    else inputs.push({ name, kind: 'file-constant', siUnit, values: known.map((x) => ({ file: x.file, valueSI: x.valueSI ?? NaN })) });
+  }
+  return { weights: weightsOf(study), steps, inputs, constants: study.constants.map((c) => ({ name: c.name, valueSI: c.valueSI })) };
+}
+
+/** How the study weights its fit, for the predict section. */
+function weightsOf(study: Study): RecipeSources['weights'] {
+  const w = study.fit?.weights;
+  if (w === undefined) return { kind: 'none' };
+  if (w.kind === 'formula') return { kind: 'formula', formula: w.formula.formula.text };
+  return { kind: w.kind };
 }
 
 /** Everything one fit produced. */
 export interface FitRun {
   readonly study: Study;
-  readonly pooled: PooledTable;
+  readonly pooled: PooledInputs;
   readonly input: FitInput;
   readonly fit: FitResult;
   readonly requests: readonly { request: CompareRequest; where: Warning['where'] }[];
@@ -61,7 +119,7 @@ export interface FitRun {
 }
 
 /** Fits the study's correlation to pooled rows and compares it with the requested handbook forms. */
-export function fitPooled(study: Study, pooled: PooledTable, overrides: FitOverrides, extraCompare: readonly string[], sink: WarningSink): FitRun {
+export function fitPooled(study: Study, pooled: PooledInputs, overrides: FitOverrides, extraCompare: readonly string[], sink: WarningSink): FitRun {
   const requests = compareRequests(study.compare, extraCompare);
   const input = fitInputFromStudy(study.fit, overrides, pooled);
   const fit = fitCorrelation(input, sink);
@@ -108,6 +166,9 @@ export function fitJson(run: FitRun): Record<string, unknown> {
       medianRatio: c.medianRatio,
       fitDeviation: c.fitDeviation,
     })),
+    // Added for `similis predict`: estimates in fit space with their covariance, residual
+    // variance, largest leverage, ranges, and how the groups are computed from quantities.
+    predict: predictionRecipe(fit, run.pooled.recipeSources ?? { weights: weightsOf(run.study), steps: [], inputs: [], constants: run.study.constants.map((c) => ({ name: c.name, valueSI: c.valueSI })) }),
   };
 }
 

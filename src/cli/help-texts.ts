@@ -9,8 +9,9 @@ defend: units converted exactly, every formula dimension-checked, every excluded
 
 Pipeline:  CSV with units -> SI -> groups -> fit -> compare with handbook forms -> report
 Commands: units (convert), reduce (rig files to groups), fit (correlation, intervals, report),
-groups (Buckingham Pi), handbook (published correlations), props (water and air).
-Coming: batch, predict.
+batch (a campaign of files, in parallel, with an index page), predict (a correlation at a design
+point, with intervals), groups (Buckingham Pi), handbook (published correlations), props (water
+and air), demo (both demo campaigns).
 
 Examples:
   $ similis units 12.5 psi --to kPa
@@ -18,6 +19,8 @@ Examples:
   $ similis units --list
   $ similis reduce data-demo/mini-loop/loop-a.csv --derive "U=4*Q/(pi*D^2)" --group "Re=rho*U*D/mu"
   $ similis fit --study data-demo/mini-loop/study.yaml --out reports/mini-loop
+  $ similis batch data-demo/pressure-drop --study data-demo/pressure-drop/study.yaml --out reports/pressure-drop
+  $ similis predict reports/pressure-drop/pooled.json --at Re=3e4,LD=100
   $ similis demo
 
 Exit codes: 0 done; 1 done, with warnings treated as errors (--strict); 2 bad input (the message
@@ -80,11 +83,17 @@ written whole or not at all (a failed run leaves an existing file untouched). Fi
 a few MB show a progress line when stderr is a terminal.`;
 
 export const DEMO_HELP = `
-Runs the furthest part of the pipeline that exists today on the small invented example in
-data-demo/ (see data-demo/README.md for the truth it was generated from), and says what it did.
+Runs the two invented demo campaigns of data-demo/ exactly as similis batch runs a campaign, into
+reports/demo/ under the working folder, and prints where the pages are:
+  reports/demo/index.html                  links both campaigns
+  reports/demo/pressure-drop/index.html    nine tubes on a water loop (two of them steel)
+  reports/demo/settling/index.html         glass and steel spheres in water-glycerol mixtures
+data-demo/README.md states the truth the files were generated from, so the reports can be judged
+against it. npm run demo builds first, then runs this.
 
-Example:
-  $ similis demo`;
+Examples:
+  $ similis demo
+  $ similis demo --jobs 1 --quiet`;
 
 export const PROPS_HELP = `
 Density, dynamic and kinematic viscosity of liquid water (IAPWS-IF97 region 1, IAPWS R12-08) or
@@ -161,6 +170,53 @@ Examples:
   $ similis fit --study data-demo/mini-loop/study.yaml --method nonlinear --json
   $ similis fit --study data-demo/mini-loop/study.yaml --model "C*Re^a" --param C=0.3 --param a=-0.25
   $ similis fit runs/*.csv --study pipe-friction.yaml --where "Re > 4000 and LD >= 20" --robust huber
+
+A fitted correlation holds only inside the range of its data; sizing of piping or pressure
+equipment follows the applicable codes and a qualified engineer's judgement.`;
+
+export const BATCH_HELP = `
+A campaign is many rig files reduced with one study. batch reduces and fits every file on its own
+(each in a worker thread, --jobs at a time), pools the rows of all files and fits them once, and
+compares each file with the pooled fit. It writes, in the --out folder:
+  index.html, index.json      the table of files (rows used and excluded, estimates with their
+                              intervals, deviation from the handbook forms, warnings), a plot of
+                              each parameter file by file against the pooled value, the failures
+  pooled.json, .csv, .html    the pooled fit, as similis fit --out writes it
+  files/NAME.json, .csv, .html  one report per file (NAME from the file's name, made safe)
+A file whose parameters disagree with the pooled fit beyond their intervals is flagged
+(warning file-disagrees; the index states the test). An exponent of a group that is constant in
+a file (L/D of one tube) is held in that file's fit, and its coefficient compared at the pooled
+exponent. A bad file never stops the campaign: it is listed with its file, line and reason, the
+others are written, and the exit code is 2. Progress goes to stderr: a bar on a terminal, one line
+per file otherwise, nothing with --quiet.
+
+Examples:
+  $ similis batch data-demo/pressure-drop --study data-demo/pressure-drop/study.yaml --out reports/pressure-drop
+  $ similis batch "data-demo/settling/*.csv" --study data-demo/settling/study.yaml --out reports/settling --jobs 2
+  $ similis batch --study data-demo/pressure-drop/study.yaml --out reports/pd --quiet     files from the study's data:
+  $ similis batch data-demo/pressure-drop --study data-demo/pressure-drop/study.yaml --out reports/pd --where "Re > 10000" --json
+
+A fitted correlation holds only inside the range of its data; sizing of piping or pressure
+equipment follows the applicable codes and a qualified engineer's judgement.`;
+
+export const PREDICT_HELP = `
+Evaluates the correlation a fit report keeps (NAME.json from similis fit --out, or pooled.json and
+files/NAME.json from similis batch) at design points, each with its confidence interval (where the
+mean lies) and prediction interval (where one new measurement would fall), by the delta method
+from the fit's covariance. A fit made on logarithms gets both intervals for ln y, transformed back
+(asymmetric). Each point gets a verdict: inside the data, or an extrapolation (warning
+extrapolation) when a group is outside its range in the data, or when the point is inside every
+range but farther from the data than any fitted point (its leverage above the largest of the fit).
+
+A point is groups (--at Re=5e4,LD=120), or measured quantities with units that the study's
+derived quantities and groups are computed from (--at Q="30 L/min",T="40 degC",D="16 mm",L="1.6 m");
+a file constant that is the same in every file of the fit (gravity, a fall height) may be left out.
+
+Examples:
+  $ similis predict reports/pressure-drop/pooled.json --at Re=3e4,LD=100
+  $ similis predict reports/pressure-drop/pooled.json --at Re=3e4,LD=100 --at Re=5e5,LD=100
+  $ similis predict reports/pressure-drop/pooled.json --at Q="30 L/min",T="40 degC",D="16 mm",L="1.6 m"
+  $ similis predict reports/settling/pooled.json --at Re=20,rho_ratio=3 --json
 
 A fitted correlation holds only inside the range of its data; sizing of piping or pressure
 equipment follows the applicable codes and a qualified engineer's judgement.`;

@@ -3,7 +3,9 @@ import type { ReduceOptions } from './commands/reduce.js';
 import type { CommandContext, CommandOutcome } from './context.js';
 import type { FitCommandOptions } from './commands/fit.js';
 import type { GroupsCommandOptions } from './commands/groups.js';
-import { DEMO_HELP, FIT_HELP, GROUPS_HELP, HANDBOOK_HELP, MAIN_HELP, PROPS_HELP, REDUCE_HELP, UNITS_HELP } from './help-texts.js';
+import type { PredictOptions } from './commands/predict.js';
+import type { BatchOptions } from './commands/batch.js';
+import { BATCH_HELP, DEMO_HELP, FIT_HELP, GROUPS_HELP, HANDBOOK_HELP, MAIN_HELP, PREDICT_HELP, PROPS_HELP, REDUCE_HELP, UNITS_HELP } from './help-texts.js';
 
 /**
  * The command tree. Only names, options and help texts live here; each command's work is in
@@ -95,6 +97,38 @@ export function buildProgram(makeContext: ContextFactory, onOutcome: OutcomeSink
     });
 
   program
+    .command('batch')
+    .summary('a campaign: every file fitted on its own and all pooled, in parallel, with an index page')
+    .description('Reduce and fit every rig file of a campaign on its own and all of them pooled; write a report per file, the pooled report and an index page.')
+    .argument('[inputs...]', "folders (their .csv files), rig CSV files or globs; default: the study file's data:")
+    .option('-s, --study <file>', 'the study file (YAML): constants, derived, groups, fit, compare')
+    .option('-o, --out <folder>', 'the campaign folder: index.html, pooled.{json,csv,html}, files/NAME.{json,csv,html}')
+    .option('-j, --jobs <n>', 'files worked on at once, each in its own worker thread (default: the number of cores)')
+    .option('-q, --quiet', 'no progress on stderr')
+    .option('-w, --where <condition>', 'fit only rows where the condition holds (replaces fit.where)')
+    .option('-c, --const <name=value unit>', 'a constant, e.g. D="0.5 in" (repeatable)', collect)
+    .option('-d, --derive <name=formula>', 'a derived quantity (repeatable)', collect)
+    .option('-g, --group <name=formula>', 'a dimensionless group (repeatable)', collect)
+    .option('--delimiter <char>', 'cell separator of the input: , ; or tab (default: detected)')
+    .addHelpText('after', BATCH_HELP)
+    .action(async (inputs: string[], opts: BatchOptions, cmd: Command) => {
+      const { runBatch } = await import('./commands/batch.js');
+      onOutcome(await runBatch(contextFor(cmd), inputs, opts));
+    });
+
+  program
+    .command('predict')
+    .summary('a fitted correlation at a design point, with confidence and prediction intervals')
+    .description('Evaluate the correlation of a fit report (NAME.json) at design points, with intervals and an extrapolation check.')
+    .argument('<report>', 'a fit report written by similis fit --out or similis batch (NAME.json)')
+    .option('-a, --at <point>', 'a design point: groups (Re=5e4,LD=120) or quantities with units (Q="30 L/min",T="40 degC"); repeatable', collect)
+    .addHelpText('after', PREDICT_HELP)
+    .action(async (report: string, opts: PredictOptions, cmd: Command) => {
+      const { runPredict } = await import('./commands/predict.js');
+      onOutcome(await runPredict(contextFor(cmd), report, opts));
+    });
+
+  program
     .command('groups')
     .summary('find the dimensionless groups of a problem and name them')
     .description('Find the dimensionless groups of a set of variables (Buckingham Pi) and recognise the named ones.')
@@ -137,12 +171,14 @@ export function buildProgram(makeContext: ContextFactory, onOutcome: OutcomeSink
 
   program
     .command('demo')
-    .summary('run the pipeline on the invented demo data')
-    .description('Run what exists of the pipeline on the invented example in data-demo/ and explain each step.')
+    .summary('run both invented demo campaigns into reports/demo/')
+    .description('Run the two invented demo campaigns of data-demo/ (a pressure-drop loop, a settling column) with similis batch, into reports/demo/.')
+    .option('-j, --jobs <n>', 'files worked on at once (default: the number of cores)')
+    .option('-q, --quiet', 'no progress on stderr')
     .addHelpText('after', DEMO_HELP)
-    .action(async (_opts: unknown, cmd: Command) => {
+    .action(async (opts: { jobs?: string; quiet?: boolean }, cmd: Command) => {
       const { runDemo } = await import('./commands/demo.js');
-      onOutcome(await runDemo(contextFor(cmd)));
+      onOutcome(await runDemo(contextFor(cmd), opts));
     });
 
   return program;

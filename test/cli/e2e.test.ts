@@ -34,15 +34,14 @@ describe('similis binary', () => {
     expect(r.out).toBe('');
     expect(r.err).toContain("unknown unit 'furlong'");
   });
-  it('the demo runs on the invented example and recovers the generator truth within the noise', () => {
-    const r = similis('demo', '--json');
+  it('the demo runs both invented campaigns and says where the pages are (the truth checks: test/cli/demo-e2e.test.ts)', () => {
+    const r = similis('demo', '--json', '--quiet');
     expect(r.code).toBe(0);
-    const doc = JSON.parse(r.out) as { rows: { f: number; fTruth: number; Re: number }[] };
-    expect(doc.rows.length).toBe(12);
-    // The generator (data-demo/generate-mini-loop.mjs) multiplies dp by 1 + 0.015 z: every
-    // f/f_truth lies within 4 standard deviations (6 %), and both regimes are present.
-    for (const row of doc.rows) expect(Math.abs(row.f / row.fTruth - 1)).toBeLessThan(0.06);
-    expect(doc.rows.some((row) => row.Re < 2000)).toBe(true);
-    expect(doc.rows.some((row) => row.Re > 3000)).toBe(true);
+    const doc = JSON.parse(r.out) as { page: string; campaigns: { folder: string; index: { counts: { files: number; failed: number } } }[] };
+    expect(doc.page).toBe('reports/demo/index.html');
+    expect(doc.campaigns.map((c) => c.folder)).toEqual(['pressure-drop', 'settling']);
+    // data-demo/README.md: nine tubes, seven settling runs; none may fail.
+    expect(doc.campaigns.map((c) => c.index.counts.files)).toEqual([9, 7]);
+    expect(doc.campaigns.every((c) => c.index.counts.failed === 0)).toBe(true);
   });
 });

@@ -1,149 +1,70 @@
-import { readFile } from 'node:fs/promises';
+import { performance } from 'node:perf_hooks';
+import { join, relative } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { InputError } from '../../common/errors.js';
-import { compileFormula, inferDimension, parseFormula } from '../../expr/index.js';
-import { describeDimension, parseUnit, toSI, type Dimension } from '../../units/index.js';
+import type { CampaignIndex } from '../batch-campaign.js';
+import { renderCampaignList } from '../batch-index.js';
+import { insideFolder } from '../batch-inputs.js';
 import type { CommandContext, CommandOutcome } from '../context.js';
-import { formatNumber, formatTable } from '../format.js';
+import { commitTogether } from '../fit-pipeline.js';
+import { runBatch } from './batch.js';
 
 /**
- * `similis demo`: runs what exists of the pipeline on the invented example in data-demo/.
- *
- * Today that is: units in the file's header and `#` constants converted to SI by the unit engine,
- * then derived quantities and groups computed by the formula engine after a dimension check.
- * The file is read here by a minimal reader that only knows this example's shape; the real rig
- * reader (csv-parse, every error with file, line and column) arrives with `similis reduce`, and
- * the demo campaigns with their generator replace this example then.
+ * `similis demo` (what `npm run demo` runs): both invented demo campaigns of data-demo/ (see
+ * data-demo/README.md and the truth.json beside each), run exactly as a user would run them with
+ * `similis batch`, into reports/demo/ under the working folder, with a page linking the two.
  */
 
-const EXAMPLE = 'data-demo/mini-loop/loop-a.csv';
+const CAMPAIGNS = [
+  { folder: 'pressure-drop', title: 'Pressure-drop loop: friction factor of drawn tubes' },
+  { folder: 'settling', title: 'Settling column: drag of spheres' },
+] as const;
 
-/** The study the demo applies, in the order it is evaluated: name, formula, expected dimension. */
-const STEPS: readonly { name: string; formula: string; meaning: string }[] = [
-  { name: 'U', formula: '4*Q/(pi*D^2)', meaning: 'mean velocity from the volume flow' },
-  { name: 'Re', formula: 'rho*U*D/mu', meaning: 'Reynolds number' },
-  { name: 'f', formula: 'dp*D/(L*0.5*rho*U^2)', meaning: 'Darcy friction factor' },
-  { name: 'LD', formula: 'L/D', meaning: 'length to diameter ratio' },
-  // The generator's stated truth: Hagen-Poiseuille below Re 2000, Blasius (1913) above 3000.
-  { name: 'f_laminar', formula: '64/Re', meaning: 'truth used below Re 2000 (Hagen-Poiseuille)' },
-  { name: 'f_blasius', formula: '0.3164*Re^-0.25', meaning: 'truth used above Re 3000 (Blasius 1913)' },
-];
-
-interface MiniTable {
-  labels: string[];
-  columns: Map<string, { unit: string; values: number[] }>;
-  constants: Map<string, { value: number; unit: string }>;
-}
-
-export async function runDemo(ctx: CommandContext): Promise<CommandOutcome> {
+export async function runDemo(ctx: CommandContext, opts: { jobs?: string; quiet?: boolean } = {}): Promise<CommandOutcome> {
+  const started = performance.now();
   const root = fileURLToPath(new URL('../../../', import.meta.url));
-  const text = await readFile(root + EXAMPLE, 'utf8');
-  const table = readMiniTable(text);
-  const n = table.labels.length;
-
-  // 1. Units -> SI, exactly as the rig reader will do it.
-  const dims = new Map<string, Dimension>();
-  const vectors = new Map<string, Float64Array>();
-  const scalars = new Map<string, number>();
-  const conversions: string[][] = [['quantity', 'as logged', 'in SI', 'dimension']];
-  for (const [name, c] of table.constants) {
-    const unit = parseUnit(c.unit, ctx.warnings);
-    const si = toSI(unit).apply(c.value);
-    dims.set(name, unit.dimension);
-    scalars.set(name, si);
-    conversions.push([name, `${c.value} ${c.unit}`, formatNumber(si, 8), describeDimension(unit.dimension)]);
+  const outRoot = join(ctx.io.cwd, 'reports', 'demo');
+  const indexes: { folder: string; title: string; index: CampaignIndex; text: string }[] = [];
+  for (const c of CAMPAIGNS) {
+    const data = join(root, 'data-demo', c.folder);
+    const out = join(outRoot, c.folder);
+    const outcome = await runBatch(ctx, [label(ctx, data)], {
+      study: label(ctx, join(data, 'study.yaml')),
+      out: label(ctx, out),
+      ...(opts.jobs === undefined ? {} : { jobs: opts.jobs }),
+      ...(opts.quiet === undefined ? {} : { quiet: opts.quiet }),
+    });
+    indexes.push({ folder: c.folder, title: c.title, index: outcome.json as unknown as CampaignIndex, text: outcome.text });
   }
-  for (const [name, c] of table.columns) {
-    const unit = parseUnit(c.unit, ctx.warnings);
-    const si = toSI(unit).applyArray(Float64Array.from(c.values));
-    dims.set(name, unit.dimension);
-    vectors.set(name, si);
-    conversions.push([name, `column [${c.unit}]`, `x ${formatNumber(toSI(unit).apply(1), 8)}`, describeDimension(unit.dimension)]);
-  }
-
-  // 2. Formulas: dimension-checked, compiled, evaluated over the whole column at once.
-  const checks: string[][] = [['name', 'formula', 'dimension', 'meaning']];
-  for (const step of STEPS) {
-    const formula = parseFormula(step.formula);
-    const { dimension } = inferDimension(formula, dims);
-    dims.set(step.name, dimension);
-    const layout = { vectors: [...vectors.keys()], scalars: [...scalars.keys()], params: [] };
-    const values = compileFormula(formula, layout).bind({ n, vectors, scalars }).evaluate([]);
-    vectors.set(step.name, values);
-    checks.push([step.name, step.formula, describeDimension(dimension), step.meaning]);
-  }
-
-  // 3. The reduced table.
-  const col = (name: string): Float64Array => vectors.get(name)!;
-  const rows: string[][] = [['run', 'Q [L/min]', 'dp [kPa]', 'U [m/s]', 'Re', 'f', 'f_truth', 'f/f_truth']];
-  const json: Record<string, unknown>[] = [];
-  for (let i = 0; i < n; i++) {
-    const f = col('f')[i]!;
-    const truth = col('Re')[i]! < 2000 ? col('f_laminar')[i]! : col('f_blasius')[i]!;
-    rows.push([
-      table.labels[i]!,
-      formatNumber(table.columns.get('Q')!.values[i]!, 6),
-      formatNumber(table.columns.get('dp')!.values[i]!, 6),
-      formatNumber(col('U')[i]!, 5),
-      formatNumber(col('Re')[i]!, 6),
-      formatNumber(f, 5),
-      formatNumber(truth, 5),
-      formatNumber(f / truth, 4),
-    ]);
-    json.push({ run: table.labels[i], U: col('U')[i], Re: col('Re')[i], f, fTruth: truth, LD: col('LD')[i] });
-  }
-
-  const textOut = [
-    `similis demo: ${EXAMPLE} (invented data, not measured; generator: data-demo/generate-mini-loop.mjs)`,
-    '',
-    '1. Units converted to SI by the unit engine (exact factors, NIST SP 811 Appendix B):',
-    indent(formatTable(conversions)),
-    '',
-    '2. Formulas checked for dimensions, then evaluated over every row:',
-    indent(formatTable(checks)),
-    '',
-    `3. Reduced table (${n} rows; L/D = ${formatNumber(col('LD')[0]!, 6)}):`,
-    indent(formatTable(rows)),
-    '',
-    'f/f_truth scatters around 1 by the 1.5 % noise the generator added: the units, the groups and',
-    'the Darcy factor (not Fanning) come out right. Next stages (reading any rig file, fitting,',
-    'reports) are not built yet; see README.md.',
+  const seconds = (performance.now() - started) / 1000;
+  const page = insideFolder(outRoot, 'index.html');
+  await commitTogether([
+    {
+      path: page,
+      label: label(ctx, page),
+      text: renderCampaignList(
+        'similis demo: two invented campaigns',
+        'Invented rig data (nothing here was measured; data-demo/README.md states the truth each file was generated from). Each campaign: every file fitted on its own and all pooled.',
+        indexes.map((x) => ({ title: x.title, link: `${x.folder}/index.html`, summary: summaryOf(x.index) })),
+      ),
+    },
+  ]);
+  const text = [
+    ...indexes.flatMap((x) => [`${x.title}`, ...x.text.trimEnd().split('\n').map((l) => `  ${l}`), '']),
+    `Both campaigns in ${seconds.toFixed(1)} s. Open ${label(ctx, page)} in a browser (README.md walks through it).`,
+    `Then try: similis predict ${label(ctx, join(outRoot, 'pressure-drop', 'pooled.json'))} --at Re=3e4,LD=100 --at Re=3e5,LD=100`,
     '',
   ].join('\n');
-  return { text: textOut, json: { example: EXAMPLE, rows: json } };
+  return { text, json: { seconds, page: label(ctx, page), campaigns: indexes.map((x) => ({ folder: x.folder, index: x.index })) } };
 }
 
-function indent(s: string): string {
-  return s
-    .split('\n')
-    .map((l) => '   ' + l)
-    .join('\n');
+/** A path as the user sees it: relative to the working folder when inside it. */
+function label(ctx: CommandContext, path: string): string {
+  const rel = relative(ctx.io.cwd, path);
+  return rel === '' ? '.' : rel.startsWith('..') ? path : rel;
 }
 
-/** Reads the demo file's own shape: '# name = value unit' lines, a 'name [unit]' header, plain rows. */
-function readMiniTable(text: string): MiniTable {
-  const constants = new Map<string, { value: number; unit: string }>();
-  const lines = text.split(/\r?\n/);
-  let i = 0;
-  for (; i < lines.length && lines[i]!.startsWith('#'); i++) {
-    const m = /^#\s*(\w+)\s*=\s*(\S+)\s+(.+?)\s*$/.exec(lines[i]!);
-    if (m) constants.set(m[1]!, { value: Number(m[2]), unit: m[3]! });
-  }
-  const header = (lines[i] ?? '').split(',').map((h) => /^(\w+)(?:\s*\[(.*)\])?$/.exec(h.trim()));
-  const columns = new Map<string, { unit: string; values: number[] }>();
-  header.slice(1).forEach((h) => h && columns.set(h[1]!, { unit: h[2] ?? '1', values: [] }));
-  const labels: string[] = [];
-  for (const [k, line] of lines.slice(i + 1).entries()) {
-    if (line.trim() === '') continue;
-    const cells = line.split(',');
-    labels.push(cells[0]!);
-    [...columns.values()].forEach((c, j) => {
-      const v = Number(cells[j + 1]);
-      if (!Number.isFinite(v)) {
-        throw new InputError('demo-data', `not a number: '${cells[j + 1]}'`, { file: EXAMPLE, line: i + k + 2 });
-      }
-      c.values.push(v);
-    });
-  }
-  return { labels, columns, constants };
+function summaryOf(index: CampaignIndex): string {
+  const c = index.counts;
+  const disagree = index.files.filter((f) => f.agreement?.disagrees === true).map((f) => f.label.split('/').pop());
+  return `${c.files} files, ${c.fitted} fitted, ${c.failed} failed; pooled ${index.pooled.fitted}; ${disagree.length === 0 ? 'every file agrees with the pooled fit' : `disagree: ${disagree.join(', ')}`}`;
 }
