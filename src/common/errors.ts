@@ -39,23 +39,7 @@ export class InputError extends Error {
 
   /** The same error placed inside a larger input (e.g. a unit string inside a CSV header cell). */
   relocate(outer: SourceSpan): InputError {
-    const col =
-      outer.column !== undefined && this.where.column !== undefined
-        ? outer.column + this.where.column - 1
-        : (outer.column ?? this.where.column);
-    const end =
-      outer.column !== undefined && this.where.endColumn !== undefined
-        ? outer.column + this.where.endColumn - 1
-        : undefined;
-    const where: SourceSpan = {
-      ...this.where,
-      ...outer,
-      ...(col === undefined ? {} : { column: col }),
-      ...(end === undefined ? {} : { endColumn: end }),
-      ...(outer.text === undefined && this.where.text !== undefined && outer.column === undefined
-        ? { text: this.where.text }
-        : {}),
-    };
+    const where = relocateSpan(this.where, outer);
     const hint = this.hint;
     return new InputError(this.kind, this.message, where, { ...(hint === undefined ? {} : { hint }), cause: this });
   }
@@ -72,6 +56,27 @@ export interface Warning {
 /** Where core functions put their warnings. Passed explicitly; there is no global logger. */
 export interface WarningSink {
   warn(w: Warning): void;
+}
+
+/**
+ * A span inside a larger input placed in that input: columns add up (a unit's column 3 inside a
+ * cell that starts at column 10 is column 12), the outer file and line win.
+ */
+export function relocateSpan(inner: SourceSpan, outer: SourceSpan): SourceSpan {
+  const col = outer.column !== undefined && inner.column !== undefined ? outer.column + inner.column - 1 : (outer.column ?? inner.column);
+  const end = outer.column !== undefined && inner.endColumn !== undefined ? outer.column + inner.endColumn - 1 : undefined;
+  return {
+    ...inner,
+    ...outer,
+    ...(col === undefined ? {} : { column: col }),
+    ...(end === undefined ? {} : { endColumn: end }),
+    ...(outer.text === undefined && inner.text !== undefined && outer.column === undefined ? { text: inner.text } : {}),
+  };
+}
+
+/** A sink that places every warning it passes on inside a larger input (see relocateSpan). */
+export function relocatingSink(sink: WarningSink, outer: SourceSpan): WarningSink {
+  return { warn: (w) => sink.warn({ ...w, where: relocateSpan(w.where ?? {}, outer) }) };
 }
 
 /** A sink that keeps warnings in order, de-duplicating identical ones. */

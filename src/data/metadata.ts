@@ -1,4 +1,4 @@
-import { InputError, type SourceSpan, type WarningSink } from '../common/errors.js';
+import { InputError, relocatingSink, type SourceSpan, type WarningSink } from '../common/errors.js';
 import { checkUserName, type FunctionTable } from '../expr/index.js';
 import { PROPERTY_FUNCTIONS } from '../properties/index.js';
 import { DATA_ERROR } from './kinds.js';
@@ -62,7 +62,7 @@ export function parseMetaLine(lineText: string, line: number, file: string, sink
     const valueColumn = a[0].length + 1;
     let q;
     try {
-      q = parseQuantityText(valueText, DATA_ERROR.constant, sink);
+      q = parseQuantityText(valueText, DATA_ERROR.constant, sink === undefined ? undefined : relocatingSink(sink, at(valueColumn)));
     } catch (e) {
       if (e instanceof InputError) throw e.relocate(at(valueColumn));
       throw e;

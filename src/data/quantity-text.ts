@@ -1,4 +1,4 @@
-import { InputError, type WarningSink } from '../common/errors.js';
+import { InputError, relocatingSink, type WarningSink } from '../common/errors.js';
 import { dimensionless, parseUnit, toSI, type Unit } from '../units/index.js';
 import { DATA_ERROR } from './kinds.js';
 import { dataMessages } from './messages.js';
@@ -62,7 +62,7 @@ export function parseQuantityText(text: string, kind: string, sink?: WarningSink
   let unit: Unit = dimensionless();
   if (unitText !== '') {
     try {
-      unit = parseUnit(unitText, sink);
+      unit = parseUnit(unitText, sink === undefined ? undefined : relocatingSink(sink, { column: unitColumn, text }));
     } catch (e) {
       if (e instanceof InputError) throw e.relocate({ column: unitColumn, text });
       throw e;

@@ -1,4 +1,4 @@
-import { InputError, type SourceSpan, type WarningSink } from '../common/errors.js';
+import { InputError, relocatingSink, type SourceSpan, type WarningSink } from '../common/errors.js';
 import type { Dimension, Unit } from '../units/index.js';
 import { describeDimension } from '../units/index.js';
 import { dataMessages } from './messages.js';
@@ -56,7 +56,8 @@ export function parseUncertainty(name: string, text: string, where: SourceSpan, 
     if (term.trim() === '' || term.includes('%')) fail(dataMessages.uncertaintyTerm(name, text.trim()), offset + lead, Math.max(1, term.trim().length));
     let q;
     try {
-      q = parseQuantityText(term, kind, sink);
+      const termWhere = { ...where, ...(where.column === undefined ? {} : { column: where.column + offset }) };
+      q = parseQuantityText(term, kind, sink === undefined ? undefined : relocatingSink(sink, termWhere));
     } catch (e) {
       if (e instanceof InputError) {
         throw e.relocate({ ...where, ...(where.column === undefined ? {} : { column: where.column + offset }) });

@@ -129,6 +129,18 @@ describe('parseRigText: missing values, comments, uncertainties', () => {
     expect(u.get('T')!.absoluteSI).toBeCloseTo(0.1, 15);
     expect(u.get('D')!.absoluteSI).toBeCloseTo(1e-5, 20);
   });
+  it('a unit warning from a # line names the file, the line and the column of the unit (not column 1 of nowhere)', () => {
+    const lines = ['# rig 2', '# u(dp) = 0.25 % + 0.01 inH2O', '# h0 = 2 inH2O', 'Q [L/min],dp [inH2O]', '1,2'];
+    const { warnings } = read(lines.join('\n') + '\n');
+    const conventions = warnings.items.filter((w) => w.code === 'unit-assumed-convention');
+    const at = (line: number) => conventions.find((w) => w.where?.line === line);
+    for (const line of [2, 3, 4]) {
+      expect(at(line)?.where?.file, `line ${line}`).toBe('rig.csv');
+      expect(at(line)?.where?.column, `line ${line}`).toBe(lines[line - 1]!.indexOf('inH2O') + 1);
+    }
+    expect(conventions.every((w) => w.where?.line !== undefined)).toBe(true);
+  });
+
   it('converts a degF column to kelvin and a degC constant to kelvin (SP 811 B.9: T/K = (t/degF + 459.67)/1.8)', () => {
     const { table } = read('# T0 = 20 degC\nT [degF]\n32\n212\n');
     expect([...numbers(table, 'T').valuesSI]).toEqual([273.15, 373.15]);
