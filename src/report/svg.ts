@@ -85,7 +85,7 @@ export async function compileSpec(spec: TopLevelSpec): Promise<object> {
  */
 export async function renderSvg(spec: TopLevelSpec): Promise<string> {
   const { vega } = await loadVega();
-  const compiled = await compileSpec(spec);
+  const compiled = await compileShaped(spec);
   const view = new vega.View(vega.parse(compiled as never), { renderer: 'none' });
   try {
     return compactNumbers(await view.toSVG());
@@ -94,12 +94,98 @@ export async function renderSvg(spec: TopLevelSpec): Promise<string> {
   }
 }
 
+/** A compiled vega spec: only its top-level data list is touched here. */
+interface VegaSpec {
+  readonly data?: readonly { readonly name: string; readonly values?: unknown }[];
+  readonly [key: string]: unknown;
+}
+
+/** Compiled plots by shape (the vega-lite spec without its data values), the most recent last. */
+const compiledShapes = new Map<string, VegaSpec>();
+/** Shapes kept: a report has about ten plots, a campaign's reports share theirs. */
+const SHAPE_CACHE_SIZE = 64;
+
+/**
+ * compileSpec with the data taken out first and put back into the compiled spec: a plot's vega-lite
+ * compilation depends on its shape only (encodings, scales, titles), so the reports of a campaign,
+ * whose plots differ in data, compile each shape once. Each inline `data: {values}` becomes a named
+ * dataset; the compiled spec gets its values back as a copy of its data list (the cached spec is
+ * never changed). test/report/svg.test.ts checks the SVG is the same as from a fresh compilation.
+ */
+async function compileShaped(spec: TopLevelSpec): Promise<VegaSpec> {
+  const datasets = new Map<string, unknown>();
+  const shape = detachData(spec, datasets) as Record<string, unknown>;
+  shape['datasets'] = Object.fromEntries([...datasets.keys()].map((name) => [name, []]));
+  const key = JSON.stringify(shape);
+  let compiled = compiledShapes.get(key);
+  if (compiled === undefined) {
+    compiled = (await compileSpec(shape as unknown as TopLevelSpec)) as VegaSpec;
+    if (compiledShapes.size >= SHAPE_CACHE_SIZE) compiledShapes.delete(compiledShapes.keys().next().value!);
+  } else {
+    compiledShapes.delete(key);
+  }
+  compiledShapes.set(key, compiled);
+  return { ...compiled, data: compiled.data?.map((d) => (datasets.has(d.name) ? { ...d, values: datasets.get(d.name) } : d)) ?? [] };
+}
+
+/** A copy of a vega-lite spec with every inline `data: {values}` replaced by a named dataset. */
+function detachData(node: unknown, datasets: Map<string, unknown>): unknown {
+  if (Array.isArray(node)) return node.map((x) => detachData(x, datasets));
+  if (node === null || typeof node !== 'object') return node;
+  const out: Record<string, unknown> = {};
+  for (const [key, value] of Object.entries(node)) {
+    if (key === 'data' && value !== null && typeof value === 'object' && Array.isArray((value as { values?: unknown }).values)) {
+      const { values, ...rest } = value as { values: unknown };
+      const name = `similis_data_${datasets.size}`;
+      datasets.set(name, values);
+      out[key] = { ...rest, name };
+    } else {
+      out[key] = detachData(value, datasets);
+    }
+  }
+  return out;
+}
+
+/** Attributes that hold geometry (compactNumbers rounds only these). */
+const GEOMETRY_ATTRIBUTES = new Set(['transform', 'd', 'x', 'y', 'x1', 'x2', 'y1', 'y2', 'width', 'height']);
+const LONG_DECIMAL = /-?\d+\.\d{3,}/g;
+const toHundredths = (m: string): string => String(Math.round(Number(m) * 100) / 100);
+
 /**
  * Rounds the coordinates vega prints with full double precision (translate(100,33.333333333333336))
  * to 2 decimals, inside geometry only (transforms, path data, x/y/width/height attributes), never
  * in text: a hundredth of a pixel is invisible, and it shortens a many-point SVG by a third.
+ * A scan over `name="` rather than one regular expression over the whole text: the same result,
+ * 4 to 5 times faster on a report's SVG (measured on the demo reports), and most of a campaign's
+ * time is its reports.
  */
 export function compactNumbers(svg: string): string {
-  const round = (text: string): string => text.replace(/-?\d+\.\d{3,}/g, (m) => String(Math.round(Number(m) * 100) / 100));
-  return svg.replace(/ (transform|d|x|y|x1|x2|y1|y2|width|height)="([^"]*)"/g, (_m, attr: string, value: string) => ` ${attr}="${round(value)}"`);
+  const parts: string[] = [];
+  let last = 0;
+  let at = svg.indexOf('="');
+  while (at >= 0) {
+    let start = at;
+    while (start > 0 && isNameChar(svg.charCodeAt(start - 1))) start--;
+    const end = svg.indexOf('"', at + 2);
+    if (end < 0) break;
+    if (start > 0 && start < at && svg.charCodeAt(start - 1) === 32 && GEOMETRY_ATTRIBUTES.has(svg.slice(start, at))) {
+      const value = svg.slice(at + 2, end);
+      const rounded = value.includes('.') ? value.replace(LONG_DECIMAL, toHundredths) : value;
+      if (rounded !== value) {
+        parts.push(svg.slice(last, at + 2), rounded);
+        last = end;
+      }
+      at = svg.indexOf('="', end + 1);
+    } else {
+      at = svg.indexOf('="', at + 2);
+    }
+  }
+  if (last === 0) return svg;
+  parts.push(svg.slice(last));
+  return parts.join('');
+}
+
+/** ASCII letter or digit (the characters of the attribute names compactNumbers looks for). */
+function isNameChar(c: number): boolean {
+  return (c >= 97 && c <= 122) || (c >= 65 && c <= 90) || (c >= 48 && c <= 57);
 }

@@ -1,4 +1,6 @@
 import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import { SEED } from '../seed.js';
 import { escapeHtml, MAX_PLOTTED_POINTS, renderReportHtml, reportPlots } from '../../src/report/index.js';
 import { html } from '../../src/report/escape.js';
 import { pointTitles } from '../../src/report/svg-titles.js';
@@ -26,6 +28,26 @@ describe('compactNumbers', () => {
   it('rounds geometry to 0.01 px and leaves text alone', () => {
     expect(compactNumbers('<g transform="translate(100,33.333333333333336)"><text x="1.23456">0.0355</text></g>')).toBe(
       '<g transform="translate(100,33.33)"><text x="1.23">0.0355</text></g>',
+    );
+  });
+
+  it('rounds negative coordinates and path data, leaves other attributes (stroke-width, aria) and short decimals alone', () => {
+    expect(compactNumbers('<path d="M-1.23456,2.5L3.14159,-0.004" stroke-width="1.23456" aria-label="x 1.23456" y1="0.12"/>')).toBe(
+      '<path d="M-1.23,2.5L3.14,0" stroke-width="1.23456" aria-label="x 1.23456" y1="0.12"/>',
+    );
+  });
+
+  it('gives what one regular expression over the whole text gives, on random SVG-like text (property test, seeded)', () => {
+    // The plain specification of the rounding (the first implementation): the scan must agree.
+    const reference = (svg: string): string =>
+      svg.replace(/ (transform|d|x|y|x1|x2|y1|y2|width|height)="([^"]*)"/g, (_m, attr: string, value: string) => ` ${attr}="${value.replace(/-?\d+\.\d{3,}/g, (m) => String(Math.round(Number(m) * 100) / 100))}"`);
+    const piece = fc.constantFrom(' ', '"', '=', '="', ' d="', ' x="', ' x1="', ' width="', 'stroke-width="', ' transform="translate(', '-', '.', ',', '<text>', '</text>', 'a', 'M', '1', '23', '4567');
+    fc.assert(
+      fc.property(fc.array(piece, { maxLength: 40 }), (parts) => {
+        const svg = parts.join('');
+        expect(compactNumbers(svg)).toBe(reference(svg));
+      }),
+      { seed: SEED, numRuns: 2000 },
     );
   });
 });
