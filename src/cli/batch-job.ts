@@ -6,7 +6,7 @@ import { whereFlag, type Study } from '../data/index.js';
 import type { Formula } from '../expr/index.js';
 import { detectPowerProduct } from '../fit/index.js';
 import { fitSpaceOf, heldParameters, holdParameters, type FitSpace, type HeldParameter } from '../predict/index.js';
-import { poolReduced, type ExcludedRow, type ReducedFile } from '../reduce/index.js';
+import { poolReduced, poolUncertainties, type ExcludedRow, type ReducedFile } from '../reduce/index.js';
 import { parseUnit } from '../units/index.js';
 import type { CommandContext } from './context.js';
 import { commitTogether, fileRecipeInfo, fitPooled, recipeSourcesOf, reduceInputs, renderFitFiles, type FileRecipeInfo, type PooledInputs } from './fit-pipeline.js';
@@ -159,7 +159,7 @@ export function pooledFrom(study: Study, parts: readonly ReducedResult[]): Poole
   const reference = parts[0]!;
   const outputs = reference.outputs.map((o) => ({ ...o, dimension: parseUnit(o.siUnit).dimension }));
   const reduced = parts.map((r) => ({ ...r.reduced!, outputs }) as ReducedFile);
-  return { ...poolReduced(reduced, outputs), recipeSources: recipeSourcesOf(study, parts.map((r) => r.recipe!)) };
+  return { ...poolReduced(reduced, outputs), uncertainties: poolUncertainties(reduced, outputs), recipeSources: recipeSourcesOf(study, parts.map((r) => r.recipe!)) };
 }
 
 /**

@@ -7,8 +7,9 @@ import { InputError, type Warning } from '../common/errors.js';
 import { compareRequests, runComparisons, type CompareRequest, type Comparison } from '../correlations/index.js';
 import { readRigHead, type Delimiter, type LocatedFormula, type Study } from '../data/index.js';
 import { fitCorrelation, fitResultToJson, POINT_FLAG, type FitInput, type FitResult } from '../fit/index.js';
-import { fitInputFromStudy, type FitOverrides } from '../fit/from-study.js';
-import { commonOutputs, planReduction, poolReduced, type PooledTable, type ReducedFile, type ReductionPlan } from '../reduce/index.js';
+import { fitInputFromStudy, weightingOf, type FitOverrides } from '../fit/from-study.js';
+import { scatterTest, type ScatterTest } from '../fit/weights.js';
+import { commonOutputs, planReduction, poolReduced, poolUncertainties, type PooledTable, type ReducedFile, type ReductionPlan } from '../reduce/index.js';
 import { predictionRecipe, type RecipeInput, type RecipeSources, type RecipeStep } from '../predict/index.js';
 import { siUnitOf } from '../units/index.js';
 import { namesIn } from '../expr/index.js';
@@ -31,6 +32,8 @@ import { AtomicFile } from './write-atomic.js';
 /** A pooled table that also says how its groups were computed (for the JSON's predict section). */
 export interface PooledInputs extends PooledTable {
   readonly recipeSources?: RecipeSources;
+  /** Propagated standard uncertainties by output name, in the pooled row order (weights: uncertainty). */
+  readonly uncertainties?: ReadonlyMap<string, Float64Array>;
 }
 
 /** Reads every file's head against the study (before any row), then streams and reduces each file. */
@@ -53,7 +56,8 @@ export async function reduceInputs(
     warnExclusions(ctx, r);
     reduced.push(r);
   }
-  return { reduced, pooled: { ...poolReduced(reduced, outputs), recipeSources: recipeSourcesOf(study, plans.map(fileRecipeInfo)) }, plans };
+  const pooled = { ...poolReduced(reduced, outputs), uncertainties: poolUncertainties(reduced, outputs), recipeSources: recipeSourcesOf(study, plans.map(fileRecipeInfo)) };
+  return { reduced, pooled, plans };
 }
 
 /** What one file's plan says about the names its groups are computed from (plain data, for workers). */
@@ -116,6 +120,8 @@ export interface FitRun {
   readonly comparisons: readonly Comparison[];
   /** The groups the model uses (predictors), in study order. */
   readonly groups: readonly string[];
+  /** The chi-square test of the scatter against the stated uncertainties (weights: uncertainty), or null. */
+  readonly scatter: ScatterTest | null;
 }
 
 /** Fits the study's correlation to pooled rows and compares it with the requested handbook forms. */
@@ -129,7 +135,10 @@ export function fitPooled(study: Study, pooled: PooledInputs, overrides: FitOver
     .map((p) => ({ name: p.group!, estimate: p.estimate, interval: p.ci95 }));
   const comparisons = runComparisons(requests, { response: fit.points.y, columns: pooled.columns, constants, fitted: fit.points.fitted }, exponents, sink);
   const groups = pooled.outputs.filter((o) => o.role === 'group' && o.name !== input.response && usedBy(fit.model, o.name)).map((o) => o.name);
-  return { study, pooled, input, fit, requests, comparisons, groups };
+  // With weights 1/u^2 from the stated uncertainties, the weighted sum of squares tests whether
+  // the instruments explain the scatter (src/fit/weights.ts, scatterTest).
+  const scatter = weightingOf(study.fit) === 'uncertainty' && fit.dof > 0 && Number.isFinite(fit.rss) ? scatterTest(fit.rss, fit.dof, sink) : null;
+  return { study, pooled, input, fit, requests, comparisons, groups, scatter };
 }
 
 /** Whether a name appears in the model text as a whole word. */
@@ -143,7 +152,7 @@ export function fitJson(run: FitRun): Record<string, unknown> {
   const { points, ranges, ...rest } = fitResultToJson(fit, pooled.rowSource) as { points: unknown[]; ranges: unknown } & Record<string, unknown>;
   const status = fit.status.converged ? 'converged' : fit.status.code;
   return {
-    fit: { ...rest, status, statusDetail: fit.status },
+    fit: { ...rest, status, statusDetail: fit.status, weighting: weightingOf(run.study.fit), scatter: run.scatter },
     groups,
     ranges,
     points,

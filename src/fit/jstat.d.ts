@@ -19,6 +19,10 @@ declare module 'jstat' {
       inv(p: number, mean: number, sd: number): number;
       cdf(x: number, mean: number, sd: number): number;
     };
+    /** The chi-square distribution (cdf: the regularized lower incomplete gamma P(dof/2, x/2)). */
+    readonly chisquare: {
+      cdf(x: number, dof: number): number;
+    };
     /** Regularized incomplete beta function I_x(a, b). */
     ibeta(x: number, a: number, b: number): number;
   }

@@ -91,10 +91,9 @@ export interface ScatterTest {
 
 /**
  * jStat.chisquare of jstat 1.9.6 (its cdf is the regularized lower incomplete gamma function
- * P(dof/2, x/2), by the series and continued fraction of Numerical Recipes 6.2). Typed here
- * because src/fit/jstat.d.ts, which another change owns, does not declare it yet.
+ * P(dof/2, x/2), by the series and continued fraction of Numerical Recipes 6.2).
  */
-const chiSquare = (jStat as unknown as { readonly chisquare: { cdf(x: number, dof: number): number } }).chisquare;
+const chiSquare = jStat.chisquare;
 
 /**
  * The chi-square test of the scatter against the stated uncertainties: with weights 1/u^2 the

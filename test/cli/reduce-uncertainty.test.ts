@@ -113,6 +113,12 @@ describe('similis reduce --monte-carlo (runReduce; the option is declared in pro
     ]);
     expect(c.warnings.items.filter((w) => w.code.startsWith('uncertainty-'))).toEqual([]);
   });
+  it('the command line takes --monte-carlo N (it was documented before it was declared)', async () => {
+    const r = await folder.run('reduce', 'loop-a.csv', '--study', 'study.yaml', '--monte-carlo', '2000', '--json');
+    expect(r.code, r.err).toBe(0);
+    const budgets = JSON.parse(r.out).budgets as Doc['budgets'];
+    expect(budgets.map((b) => b.monteCarlo?.samples)).toEqual([2000, 2000, 2000]);
+  });
   it("warns 'uncertainty-nonlinear' for f ~ 1/Q^2 when u(Q) = 30 %", async () => {
     const big = tmpFolder({ 'a.csv': LOOP_A, 'study.yaml': STUDY.replace('Q: 1 %', 'Q: 30 %') });
     const c2 = { io: memoryIo(big.root), json: true, warnings: new WarningList(), argv: [] };
