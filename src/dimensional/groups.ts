@@ -153,12 +153,15 @@ function alternativesTo(
   ranked: readonly { set: readonly number[]; groups: readonly RawGroup[] }[],
   variables: readonly ClassifiedVariable[],
 ): AlternativeSet[] {
-  const labelsOf = (groups: readonly RawGroup[]): string[] =>
-    groups.map((g) => {
-      const rec = g.recognition;
-      if (rec?.type === 'named') return relationText(rec.symbol, rec.power, rec.factor);
-      return formatProduct(g.exponents);
+  // A name that two groups of one set share (Re on D and Re on L) is followed by its formula.
+  const labelsOf = (groups: readonly RawGroup[]): string[] => {
+    const names = groups.map((g) => (g.recognition?.type === 'named' ? relationText(g.recognition.symbol, g.recognition.power, g.recognition.factor) : null));
+    return groups.map((g, k) => {
+      const name = names[k];
+      if (name === null || name === undefined) return formatProduct(g.exponents);
+      return names.filter((x) => x === name).length > 1 ? `${name} = ${formatProduct(g.exponents)}` : name;
     });
+  };
   const signature = (labels: readonly string[]): string => [...labels].sort().join('|');
   const seen = new Set([signature(labelsOf(chosen.groups))]);
   const out: AlternativeSet[] = [];

@@ -44,6 +44,12 @@ describe('findGroups: pipe pressure drop', () => {
     expect(floats.evaluate(f.formula, v) as number).toBeCloseTo(fromDarcyWeisbach, 12);
   });
 
+  it('lists other repeating sets without two groups under one bare name (rho, U, mu gives a Reynolds number on D and one on L)', () => {
+    const withMu = pipe.alternatives.find((a) => a.repeating.join(',') === 'rho,U,mu');
+    expect(withMu?.groups).toEqual(['Eu', 'Re = rho*U*D/mu', 'Re = rho*U*L/mu']);
+    for (const a of pipe.alternatives) expect(new Set(a.groups).size, a.repeating.join(',')).toBe(a.groups.length);
+  });
+
   it('with a roughness height has 7 - 3 = 4 groups, adding eps/D (check-values.md 5.1)', () => {
     const rough = findGroups(vars('dp=Pa rho=kg/m^3 mu=Pa*s D=m L=m U=m/s eps=m'), { response: 'dp' });
     expect(rough.groups).toHaveLength(4);
