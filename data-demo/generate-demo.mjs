@@ -19,29 +19,14 @@
 import { mkdirSync, writeFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { waterDensity, waterViscosity } from '../dist/properties/index.js';
+import { mulberry32, normal } from './random.mjs';
 
 const here = (path) => fileURLToPath(new URL(path, import.meta.url));
 
-/** mulberry32: a small seeded PRNG (public-domain algorithm by Tommy Ettinger). */
-function mulberry32(seed) {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
-/** Standard normal deviates by the Box-Muller transform (Box and Muller 1958). */
+/** Standard normal deviates from a seed (random.mjs). */
 function normals(seed) {
   const rand = mulberry32(seed);
-  return () => {
-    const u = 1 - rand();
-    const v = rand();
-    return Math.sqrt(-2 * Math.log(u)) * Math.cos(2 * Math.PI * v);
-  };
+  return () => normal(rand);
 }
 
 /** Four significant digits, as a logger prints them. */

@@ -19,6 +19,7 @@
  */
 import { writeFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
+import { mulberry32, normal } from './random.mjs';
 
 const RHO_KG_M3 = 998.21;
 const MU_PA_S = 1.0016e-3;
@@ -26,25 +27,6 @@ const D_IN = 0.5;
 const L_M = 1.2;
 const SEED = 7;
 const FLOWS_L_MIN = [0.3, 0.5, 0.8, 1.1, 2, 3, 4, 6, 8, 10, 12.5, 15];
-
-/** mulberry32: a small seeded PRNG (public-domain algorithm by Tommy Ettinger). */
-function mulberry32(seed) {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
-/** Standard normal deviate by the Box-Muller transform (Box and Muller 1958). */
-function normal(rand) {
-  const u = 1 - rand();
-  const v = rand();
-  return Math.sqrt(-2 * Math.log(u)) * Math.cos(2 * Math.PI * v);
-}
 
 const rand = mulberry32(SEED);
 const diameterM = D_IN * 0.0254;
