@@ -235,15 +235,24 @@ export function residualPlots(model: ReportModel): PlotSpec[] {
       spec: residualSpec(fittedRows, `fitted ${model.response}`, yTitle, logSuits(fittedRows.map((r) => r.x)), studentized, { width: WIDTH, height: 200 }) as TopLevelSpec,
     },
   ];
-  const panels = model.groups.map((g) => {
+  // A group with one value in these data (the L/D of one tube) would give a panel of one vertical
+  // line of points: it is named in the caption instead.
+  const constant: string[] = [];
+  const panels = model.groups.flatMap((g) => {
     const rows = toRows((p) => p.groups[g.name] ?? NaN);
-    return residualSpec(rows, g.name, yTitle, logSuits(rows.map((r) => r.x)), studentized, SMALL);
+    const xs = rows.map((r) => r.x).filter(Number.isFinite);
+    if (xs.length > 0 && xs.every((x) => x === xs[0])) {
+      constant.push(`${g.name} = ${Number(xs[0]!.toPrecision(6))}`);
+      return [];
+    }
+    return [residualSpec(rows, g.name, yTitle, logSuits(rows.map((r) => r.x)), studentized, SMALL)];
   });
+  const constantNote = constant.length === 0 ? '' : ` No panel for ${constant.join(', ')}: the same in every point.`;
   if (panels.length > 0) {
     plots.push({
       id: 'residuals-groups',
       title: 'Residuals against each group',
-      caption: `A trend here means the correlation misses how that group acts (a wrong exponent, or a group that should be in the model).${note}`,
+      caption: `A trend here means the correlation misses how that group acts (a wrong exponent, or a group that should be in the model).${constantNote}${note}`,
       spec: { concat: panels, columns: 2 } as unknown as TopLevelSpec,
     });
   }

@@ -52,6 +52,18 @@ describe('compactNumbers', () => {
   });
 });
 
+describe('reportPlots: residuals against each group', () => {
+  it('leaves out the panel of a group that has one value in the data (the L/D of one tube) and names it in the caption', () => {
+    const model = fixtureModel(60);
+    const hostile = model.groups[1]!.name;
+    const oneTube = { ...model, points: model.points.map((p) => ({ ...p, groups: { ...p.groups, [hostile]: 50 } })) };
+    const panels = (m: typeof model) => (reportPlots(m).find((p) => p.id === 'residuals-groups')!.spec as unknown as { concat: unknown[] }).concat.length;
+    expect(panels(model)).toBe(2);
+    expect(panels(oneTube)).toBe(1);
+    expect(reportPlots(oneTube).find((p) => p.id === 'residuals-groups')!.caption).toContain(`No panel for ${hostile} = 50`);
+  });
+});
+
 describe('renderReportHtml', () => {
   it('puts the sections in reading order, with the cautions near the top', async () => {
     const page = await renderReportHtml(fixtureModel());
