@@ -1,5 +1,5 @@
 import { randomBytes } from 'node:crypto';
-import { open, rename, stat, unlink, type FileHandle } from 'node:fs/promises';
+import { mkdir, open, rename, stat, unlink, type FileHandle } from 'node:fs/promises';
 import { basename, dirname, join } from 'node:path';
 import { InputError } from '../common/errors.js';
 
@@ -120,6 +120,27 @@ export async function writeFileAtomic(target: string, produce: (write: (data: st
     throw e;
   }
   await file.commit();
+}
+
+/**
+ * Makes an output folder and its parents (nothing when it exists).
+ * @param label the folder as the user wrote it, for messages
+ * @throws {InputError} 'output-path' when a part of the path is a file or the folder cannot be made.
+ * @example await makeOutputFolder('/data/reports', 'reports')
+ */
+export async function makeOutputFolder(folder: string, label: string = folder): Promise<void> {
+  try {
+    await mkdir(folder, { recursive: true });
+  } catch (e) {
+    const code = (e as NodeJS.ErrnoException).code;
+    const why =
+      code === 'ENOTDIR' || code === 'EEXIST'
+        ? 'a part of that path is a file, not a folder'
+        : code === 'EACCES' || code === 'EPERM' || code === 'EROFS'
+          ? 'no permission to make it'
+          : String((e as Error).message);
+    throw new InputError('output-path', `cannot make the folder ${label}: ${why}; give an output path inside a folder you can write`, { file: label }, { cause: e });
+  }
 }
 
 /** Makes the rename durable (POSIX: fsync the folder); skipped where folders cannot be opened. */
