@@ -1,5 +1,5 @@
 import { createHash } from 'node:crypto';
-import { mkdir, readFile } from 'node:fs/promises';
+import { readFile } from 'node:fs/promises';
 import { dirname, resolve } from 'node:path';
 import { arch, platform } from 'node:os';
 import type { WarningSink } from '../common/errors.js';
@@ -20,7 +20,7 @@ import { VERSION } from './program.js';
 import { fileChunks, reduceFile, type InputFile } from './reduce-inputs.js';
 import { jsonReplacer } from './run.js';
 import { vegaRuntime } from './vega-runtime.js';
-import { AtomicFile } from './write-atomic.js';
+import { AtomicFile, makeOutputFolder } from './write-atomic.js';
 
 /**
  * The steps of a fit, shared by `similis fit` (all files pooled) and `similis batch` (each file on
@@ -43,7 +43,7 @@ export async function reduceInputs(
 ): Promise<{ reduced: ReducedFile[]; pooled: PooledInputs; plans: ReductionPlan[] }> {
   const plans = [];
   for (const f of files) {
-    const head = await readRigHead(fileChunks(f.path), { file: f.label, ...(delimiter === undefined ? {} : { delimiter }), sink: ctx.warnings });
+    const head = await readRigHead(fileChunks(f.path, undefined, f.label), { file: f.label, ...(delimiter === undefined ? {} : { delimiter }), sink: ctx.warnings });
     plans.push(planReduction(study, head, where === undefined ? {} : { where }, ctx.warnings));
   }
   const outputs = commonOutputs(plans);
@@ -232,7 +232,7 @@ export async function commitTogether(targets: readonly { path: string; label: st
   const files: AtomicFile[] = [];
   try {
     for (const t of targets) {
-      await mkdir(dirname(t.path), { recursive: true });
+      await makeOutputFolder(dirname(t.path), dirname(t.label));
       const f = await AtomicFile.create(t.path, t.label);
       files.push(f);
       await f.write(t.text);
