@@ -56,6 +56,8 @@ export async function runCli(argv: readonly string[], io: CliIo): Promise<ExitCo
   return strict && warnings.length > 0 ? EXIT.warningsAsErrors : EXIT.ok;
 }
 
+const USAGE_HINT = "the options and arguments each command expects are listed by 'similis COMMAND --help'";
+
 /**
  * Prints a failure and returns its exit code: 2 for bad input (InputError, usage errors), 3 for
  * anything else (an internal fault).
@@ -66,7 +68,8 @@ export function handleFailure(e: unknown, io: CliIo, json: boolean, context: Com
       return EXIT.ok;
     }
     // commander has written its message (unknown option, missing argument...) to stderr.
-    if (json) io.stdout(JSON.stringify({ error: { kind: 'usage', message: e.message.replace(/^error: /, '') } }) + '\n');
+    io.stderr(`  hint: ${USAGE_HINT} [usage]\n`);
+    if (json) io.stdout(JSON.stringify({ error: { kind: 'usage', message: e.message.replace(/^error: /, ''), hint: USAGE_HINT } }) + '\n');
     return EXIT.badInput;
   }
   for (const w of context?.warnings.items ?? []) io.stderr(renderWarning(w));
