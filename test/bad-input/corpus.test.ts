@@ -1,5 +1,5 @@
 import { createHash } from 'node:crypto';
-import { cpSync, mkdtempSync, readdirSync, readFileSync, rmSync, statSync, symlinkSync, mkdirSync } from 'node:fs';
+import { cpSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, statSync, symlinkSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { dirname, join, relative } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -28,8 +28,10 @@ interface CaseSpec {
   readonly setup?: readonly (readonly string[])[];
   /** Symbolic links to make: link name -> target (git keeps none that dangle well across systems). */
   readonly symlinks?: Readonly<Record<string, string>>;
-  /** The command line; an argument '@file:NAME' is replaced by the text of NAME in the case folder. */
-  readonly argv: readonly string[];
+  /** Large files made at run time (so that the corpus stays small): name -> pieces. */
+  readonly generated?: Readonly<Record<string, Pieces>>;
+  /** The command line; a long argument is given as pieces. */
+  readonly argv: readonly (string | { readonly pieces: Pieces })[];
   readonly exit: number;
   readonly kind: string;
   readonly where: { readonly file?: string; readonly line?: number; readonly column?: number };
@@ -37,10 +39,14 @@ interface CaseSpec {
   readonly found?: string;
 }
 
+/** Text as [piece, times repeated] pairs: [['x=', 1], ['(', 200]] is x= followed by 200 '('. */
+type Pieces = readonly (readonly [string, number])[];
+const joinPieces = (pieces: Pieces): string => pieces.map(([text, times]) => text.repeat(times)).join('');
+
 const HERE = dirname(fileURLToPath(import.meta.url));
 const CASES = join(HERE, 'cases');
-/** Files of a case folder that describe the case and are not inputs. */
-const NOT_INPUT = /^(case\.json|argv-\d+\.txt)$/;
+/** The file of a case folder that describes the case (not an input). */
+const NOT_INPUT = /^case\.json$/;
 
 /**
  * The one rule for an actionable message, applied to every case: besides quoting what was found
@@ -88,6 +94,10 @@ describe('bad-input corpus (test/bad-input/cases)', () => {
       try {
         if (spec.base !== undefined) cpSync(join(HERE, 'base', spec.base), root, { recursive: true });
         cpSync(join(CASES, name), root, { recursive: true, filter: (src) => !NOT_INPUT.test(relative(join(CASES, name), src)) });
+        for (const [file, pieces] of Object.entries(spec.generated ?? {})) {
+          mkdirSync(dirname(join(root, file)), { recursive: true });
+          writeFileSync(join(root, file), joinPieces(pieces));
+        }
         for (const [link, target] of Object.entries(spec.symlinks ?? {})) {
           mkdirSync(dirname(join(root, link)), { recursive: true });
           symlinkSync(target, join(root, link));
@@ -96,7 +106,7 @@ describe('bad-input corpus (test/bad-input/cases)', () => {
           const s = await cli(root, argv);
           expect(s.code, `setup ${argv.join(' ')}: ${s.err}`).toBe(EXIT.ok);
         }
-        const argv = spec.argv.map((a) => (a.startsWith('@file:') ? readFileSync(join(CASES, name, a.slice(6)), 'utf8') : a));
+        const argv = spec.argv.map((a) => (typeof a === 'string' ? a : joinPieces(a.pieces)));
         const before = walk(root);
         const r = await cli(root, [...argv, '--json']);
         expect(r.code, r.err).toBe(spec.exit);
