@@ -4,6 +4,7 @@ import { dirname, resolve } from 'node:path';
 import { arch, platform } from 'node:os';
 import type { WarningSink } from '../common/errors.js';
 import { InputError, type Warning } from '../common/errors.js';
+import { notFiniteWarning } from '../common/not-finite.js';
 import { compareRequests, runComparisons, type CompareRequest, type Comparison } from '../correlations/index.js';
 import { readRigHead, type Delimiter, type LocatedFormula, type Study } from '../data/index.js';
 import { fitCorrelation, fitResultToJson, POINT_FLAG, type FitInput, type FitResult } from '../fit/index.js';
@@ -187,6 +188,10 @@ export interface ReportMeta {
 /** The three output texts of a fit: every number (JSON), every point (CSV), the report (HTML). */
 export async function renderFitFiles(run: FitRun, meta: ReportMeta): Promise<{ json: string; csv: string; html: string }> {
   const hashes = await Promise.all(meta.files.map(async (f) => createHash('sha256').update(await readFile(f.path)).digest('hex')));
+  // A value that is not a finite number is announced in all three outputs, never silent.
+  const body = fitJson(run);
+  const notFinite = notFiniteWarning(body, 'this report');
+  const warnings = notFinite === undefined ? meta.warnings : [...meta.warnings, notFinite];
   const model = buildReportModel({
     title: meta.title,
     fit: run.fit,
@@ -194,7 +199,7 @@ export async function renderFitFiles(run: FitRun, meta: ReportMeta): Promise<{ j
     rowSource: run.pooled.rowSource,
     groups: run.groups,
     excluded: run.pooled.excluded,
-    warnings: meta.warnings,
+    warnings,
     comparisons: run.comparisons.map((c, i) => reportComparison(c, run.requests[i]!.request.correlation.source)),
     handbookCurves: (grid, held) => handbookCurves(run, grid, held),
     parityBand: meta.parityBand,
@@ -208,7 +213,7 @@ export async function renderFitFiles(run: FitRun, meta: ReportMeta): Promise<{ j
     platform: `${platform()} ${arch()}, Node ${process.version}`,
     command: ['similis', ...meta.argv].map((a) => (/^[\w./=:-]+$/.test(a) ? a : JSON.stringify(a))).join(' '),
   });
-  const json = JSON.stringify({ ...fitJson(run), warnings: meta.warnings.map((w) => ({ code: w.code, message: w.message })) }, jsonReplacer, 2) + '\n';
+  const json = JSON.stringify({ ...body, warnings: warnings.map((w) => ({ code: w.code, message: w.message })) }, jsonReplacer, 2) + '\n';
   const options = meta.interactive === true ? { interactiveRuntime: await vegaRuntime() } : {};
   return { json, csv: pointsCsv(run), html: await renderReportHtml(model, options) };
 }

@@ -1,5 +1,6 @@
 import { CommanderError } from 'commander';
 import { InputError, WarningList } from '../common/errors.js';
+import { notFiniteWarning } from '../common/not-finite.js';
 import type { CommandContext, CommandOutcome } from './context.js';
 import { EXIT, type CliIo, type ExitCode } from './io.js';
 import { buildProgram } from './program.js';
@@ -46,6 +47,10 @@ export async function runCli(argv: readonly string[], io: CliIo): Promise<ExitCo
     // A bare `similis` prints help (commander handles it); nothing else ends here.
     return EXIT.ok;
   }
+  if (context.json) {
+    const w = notFiniteWarning(outcome.json, 'the JSON output');
+    if (w !== undefined) context.warnings.warn(w);
+  }
   const warnings = context.warnings.items;
   if (context.json) {
     io.stdout(JSON.stringify({ ...outcome.json, warnings: warnings.map(warningJson) }, jsonReplacer, 2) + '\n');
@@ -91,7 +96,8 @@ export function handleFailure(e: unknown, io: CliIo, json: boolean, context: Com
 
 /**
  * JSON has no NaN or Infinity; writing them as null would hide them. They are written as the
- * strings "NaN", "Infinity", "-Infinity" so that a script sees them and can decide.
+ * strings "NaN", "Infinity", "-Infinity" so that a script sees them and can decide, and the
+ * document carries a 'not-finite' warning naming where they are (notFiniteWarning).
  */
 export function jsonReplacer(_key: string, value: unknown): unknown {
   if (typeof value === 'number' && !Number.isFinite(value)) return String(value);

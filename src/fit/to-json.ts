@@ -44,5 +44,36 @@ export function fitResultToJson(result: FitResult, source?: RowSource): Record<s
       flags: flagWords(points.flags[i]!),
     });
   }
-  return JSON.parse(JSON.stringify({ ...rest, points: rows }, (_key, value: unknown) => (typeof value === 'number' && !Number.isFinite(value) ? null : value)));
+  const notFinite = new Map<string, { value: string; count: number }>();
+  const json = finiteCopy({ ...rest, points: rows }, '', notFinite) as Record<string, unknown>;
+  // Announced, never silent: which values were not finite numbers and are written as null.
+  json['notFinite'] = [...notFinite].map(([path, v]) => ({ path, value: v.value, count: v.count }));
+  return json;
+}
+
+/**
+ * A JSON-ready copy in which every number that is not finite (NaN, Infinity) is null, with its
+ * path (array indices of points as [*]) and its value recorded in `found`. Functions and
+ * undefined are dropped, typed arrays become arrays, as JSON.stringify does.
+ */
+function finiteCopy(value: unknown, path: string, found: Map<string, { value: string; count: number }>): unknown {
+  if (typeof value === 'number') {
+    if (Number.isFinite(value)) return value;
+    const key = path.replace(/^points\[\d+\]/, 'points[*]');
+    const seen = found.get(key);
+    if (seen === undefined) found.set(key, { value: String(value), count: 1 });
+    else seen.count++;
+    return null;
+  }
+  if (value === null || typeof value !== 'object') return typeof value === 'function' ? undefined : value;
+  if (Array.isArray(value) || ArrayBuffer.isView(value)) {
+    return Array.from(value as ArrayLike<unknown>, (x, i) => finiteCopy(x, `${path}[${i}]`, found) ?? null);
+  }
+  if (typeof (value as { toJSON?: unknown }).toJSON === 'function') return finiteCopy((value as { toJSON: () => unknown }).toJSON(), path, found);
+  const out: Record<string, unknown> = {};
+  for (const [k, x] of Object.entries(value)) {
+    const c = finiteCopy(x, path === '' ? k : `${path}.${k}`, found);
+    if (c !== undefined) out[k] = c;
+  }
+  return out;
 }
