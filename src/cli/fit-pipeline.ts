@@ -7,7 +7,7 @@ import { InputError, type Warning } from '../common/errors.js';
 import { notFiniteWarning } from '../common/not-finite.js';
 import { compareRequests, runComparisons, type CompareRequest, type Comparison } from '../correlations/index.js';
 import { readRigHead, type Delimiter, type LocatedFormula, type Study } from '../data/index.js';
-import { fitCorrelation, fitResultToJson, POINT_FLAG, type FitInput, type FitResult } from '../fit/index.js';
+import { fitCorrelation, fitPointRows, fitResultToJson, POINT_FLAG, type FitInput, type FitResult } from '../fit/index.js';
 import { fitInputFromStudy, type FitOverrides } from '../fit/from-study.js';
 import { commonOutputs, planReduction, poolReduced, type PooledTable, type ReducedFile, type ReductionPlan } from '../reduce/index.js';
 import { predictionRecipe, type RecipeInput, type RecipeSources, type RecipeStep } from '../predict/index.js';
@@ -138,10 +138,19 @@ function usedBy(model: string, name: string): boolean {
   return new RegExp(`(^|[^\\p{L}\\p{Nd}_])${name.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}($|[^\\p{L}\\p{Nd}_])`, 'u').test(model);
 }
 
-/** The JSON contract of `similis fit` (see README): fit, ranges, points, excluded, comparisons. */
-export function fitJson(run: FitRun): Record<string, unknown> {
+/** Stands for the points in fitJson(run, false): NAME.json streams them in its place. */
+const POINTS_STREAMED = 'similis: the points are streamed here';
+/** Points formatted per block when NAME.json is written. */
+const POINT_BLOCK = 10_000;
+
+/**
+ * The JSON contract of `similis fit` (see README): fit, ranges, points, excluded, comparisons.
+ * @param withPoints false: `points` holds a placeholder (jsonText streams them).
+ */
+export function fitJson(run: FitRun, withPoints = true): Record<string, unknown> {
   const { fit, pooled, comparisons, groups } = run;
-  const { points, ranges, ...rest } = fitResultToJson(fit, pooled.rowSource) as { points: unknown[]; ranges: unknown } & Record<string, unknown>;
+  const { points: pointRows, ranges, ...rest } = fitResultToJson(fit, pooled.rowSource, { points: withPoints }) as { points?: unknown[]; ranges: unknown } & Record<string, unknown>;
+  const points = withPoints ? pointRows : POINTS_STREAMED;
   const status = fit.status.converged ? 'converged' : fit.status.code;
   return {
     fit: { ...rest, status, statusDetail: fit.status },
@@ -186,10 +195,10 @@ export interface ReportMeta {
 }
 
 /** The three output texts of a fit: every number (JSON), every point (CSV), the report (HTML). */
-export async function renderFitFiles(run: FitRun, meta: ReportMeta): Promise<{ json: string; csv: string; html: string }> {
+export async function renderFitFiles(run: FitRun, meta: ReportMeta): Promise<{ json: Iterable<string>; csv: Iterable<string>; html: string }> {
   const hashes = await Promise.all(meta.files.map(async (f) => createHash('sha256').update(await readFile(f.path)).digest('hex')));
   // A value that is not a finite number is announced in all three outputs, never silent.
-  const body = fitJson(run);
+  const body = fitJson(run, false);
   const notFinite = notFiniteWarning(body, 'this report');
   const warnings = notFinite === undefined ? meta.warnings : [...meta.warnings, notFinite];
   const model = buildReportModel({
@@ -213,9 +222,32 @@ export async function renderFitFiles(run: FitRun, meta: ReportMeta): Promise<{ j
     platform: `${platform()} ${arch()}, Node ${process.version}`,
     command: ['similis', ...meta.argv].map((a) => (/^[\w./=:-]+$/.test(a) ? a : JSON.stringify(a))).join(' '),
   });
-  const json = JSON.stringify({ ...body, warnings: warnings.map((w) => ({ code: w.code, message: w.message })) }, jsonReplacer, 2) + '\n';
+  const json = jsonText(run, { ...body, warnings: warnings.map((w) => ({ code: w.code, message: w.message })) });
   const options = meta.interactive === true ? { interactiveRuntime: await vegaRuntime() } : {};
   return { json, csv: pointsCsv(run), html: await renderReportHtml(model, options) };
+}
+
+/**
+ * NAME.json as pieces: the document as JSON.stringify(doc, jsonReplacer, 2) writes it, with the
+ * points formatted a block at a time in place of the placeholder, so that a fit of millions of
+ * rows never builds one object or one string per point for the whole file (a JavaScript string
+ * holds at most about 500 million characters).
+ */
+function* jsonText(run: FitRun, doc: Record<string, unknown>): Generator<string> {
+  const text = JSON.stringify(doc, jsonReplacer, 2) + '\n';
+  const [head, tail] = text.split(JSON.stringify(POINTS_STREAMED)) as [string, string];
+  yield head;
+  if (run.fit.points.y.length === 0) yield '[]';
+  else {
+    yield '[\n';
+    let first = true;
+    for (const rows of fitPointRows(run.fit, run.pooled.rowSource, POINT_BLOCK)) {
+      yield (first ? '' : ',\n') + rows.map((r) => JSON.stringify(r, jsonReplacer, 2).replace(/^/gm, '    ')).join(',\n');
+      first = false;
+    }
+    yield '\n  ]';
+  }
+  yield tail;
 }
 
 /**
@@ -233,14 +265,15 @@ export function outputBase(cwd: string, out: string, files: readonly InputFile[]
 }
 
 /** Writes every target to a temporary file first, then renames them all: all or none. */
-export async function commitTogether(targets: readonly { path: string; label: string; text: string }[]): Promise<void> {
+export async function commitTogether(targets: readonly { path: string; label: string; text: string | Iterable<string> }[]): Promise<void> {
   const files: AtomicFile[] = [];
   try {
     for (const t of targets) {
       await makeOutputFolder(dirname(t.path), dirname(t.label));
       const f = await AtomicFile.create(t.path, t.label);
       files.push(f);
-      await f.write(t.text);
+      if (typeof t.text === 'string') await f.write(t.text);
+      else for (const piece of t.text) await f.write(piece);
     }
     for (const f of files) await f.commit();
   } catch (e) {
@@ -293,20 +326,25 @@ function medianOf(values: Float64Array | undefined): number {
 }
 
 /** One row per point: file, line, the groups, response, fitted value, residuals, flags. */
-function pointsCsv(run: FitRun): string {
+/** NAME.csv as pieces of POINT_BLOCK lines (see jsonText). */
+function* pointsCsv(run: FitRun): Generator<string> {
   const { fit, pooled, groups } = run;
   const head = ['file', 'line', ...groups, fit.response, 'fitted', 'residual', 'relative_deviation', 'studentized', 'leverage', 'cooks_distance', 'flags'];
-  const lines = [head.join(',')];
+  let lines = [head.join(',')];
   const p = fit.points;
   const cols = groups.map((g) => pooled.columns.get(g)!);
   for (let i = 0; i < pooled.n; i++) {
+    if (lines.length >= POINT_BLOCK) {
+      yield lines.join('\n') + '\n';
+      lines = [];
+    }
     const file = pooled.rowSource.file[pooled.rowSource.fileIndex[i]!]!;
     const flags = flagNames(p.flags[i]!);
     lines.push(
       [csvText(file), pooled.rowSource.line[i], ...cols.map((c) => c[i]), p.y[i], p.fitted[i], p.residual[i], p.relativeDeviation[i], p.studentized[i], p.leverage[i], p.cooksDistance[i], csvText(flags)].join(','),
     );
   }
-  return lines.join('\n') + '\n';
+  yield lines.join('\n') + '\n';
 }
 
 /** Short flag names for the CSV (the JSON and the report carry the worded reasons). */

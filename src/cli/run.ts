@@ -47,13 +47,15 @@ export async function runCli(argv: readonly string[], io: CliIo): Promise<ExitCo
     // A bare `similis` prints help (commander handles it); nothing else ends here.
     return EXIT.ok;
   }
-  if (context.json) {
-    const w = notFiniteWarning(outcome.json, 'the JSON output');
+  // Read once: a command may build its JSON document only when asked (a getter).
+  const doc = context.json ? outcome.json : undefined;
+  if (doc !== undefined) {
+    const w = notFiniteWarning(doc, 'the JSON output');
     if (w !== undefined) context.warnings.warn(w);
   }
   const warnings = context.warnings.items;
-  if (context.json) {
-    io.stdout(JSON.stringify({ ...outcome.json, warnings: warnings.map(warningJson) }, jsonReplacer, 2) + '\n');
+  if (doc !== undefined) {
+    io.stdout(JSON.stringify({ ...doc, warnings: warnings.map(warningJson) }, jsonReplacer, 2) + '\n');
   } else {
     io.stdout(outcome.text);
   }

@@ -47,7 +47,13 @@ export async function runFit(ctx: CommandContext, inputs: readonly string[], opt
     await commitTogether(targets);
     written = targets.map((t) => t.label);
   }
-  return { text: summaryText(run, written), json: fitJson(run) };
+  // The JSON document (every point) is built only when --json asks for it.
+  return {
+    text: summaryText(run, written),
+    get json() {
+      return fitJson(run);
+    },
+  };
 }
 
 function parityBandOf(text: string | undefined): number {
