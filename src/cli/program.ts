@@ -64,6 +64,7 @@ export function buildProgram(makeContext: ContextFactory, onOutcome: OutcomeSink
     .option('-d, --derive <name=formula>', 'a derived quantity, e.g. U="4*Q/(pi*D^2)" (repeatable)', collect)
     .option('-g, --group <name=formula>', 'a dimensionless group, e.g. Re="rho*U*D/mu" (repeatable)', collect)
     .option('--delimiter <char>', 'cell separator of the input: , ; or tab (default: detected from the header)')
+    .option('--monte-carlo <n>', 'check the first-order uncertainties with N seeded Monte Carlo draws per row (at least 100)')
     .addHelpText('after', REDUCE_HELP)
     .action(async (files: string[], opts: ReduceOptions, cmd: Command) => {
       const { runReduce } = await import('./commands/reduce.js');
