@@ -1,5 +1,6 @@
 import { readdir, stat } from 'node:fs/promises';
 import { basename, extname, join, resolve, sep } from 'node:path';
+import { InputError } from '../common/errors.js';
 import type { Located } from '../data/index.js';
 import type { CliIo } from './io.js';
 import { displayPath, resolveInputs, type InputFile } from './reduce-inputs.js';
@@ -33,7 +34,10 @@ async function folderFiles(io: CliIo, folder: string): Promise<InputFile[]> {
   const files: InputFile[] = [];
   for (const n of names) {
     const path = join(folder, n);
-    const s = await stat(path);
+    const s = await stat(path).catch(() => undefined);
+    if (s === undefined) {
+      throw new InputError('file-not-found', `${displayPath(io, path)} is in the folder but cannot be read (a link to a file that does not exist?): expected a readable CSV file; fix or remove it`, { file: displayPath(io, path) });
+    }
     if (s.isFile()) files.push({ path, label: displayPath(io, path), bytes: s.size });
   }
   if (files.length === 0) return resolveInputs(io, [join(displayPath(io, folder), '*.csv')], [], null);

@@ -179,7 +179,7 @@ export async function fitFileJob(setup: BatchSetup, loaded: LoadedStudy, job: Fi
     seconds: reducedResult.seconds + (performance.now() - started) / 1000,
   });
   let fit: FileFit;
-  let texts: { json: string; csv: string; html: string };
+  let texts: Awaited<ReturnType<typeof renderFitFiles>>;
   try {
     const pooled = pooledFrom(loaded.study, [reducedResult]);
     const { study, held, coefficient } = fileStudy(loaded.study, pooled.columns, pooled.n, warnings, job.file.label);

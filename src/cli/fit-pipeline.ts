@@ -1,12 +1,13 @@
 import { createHash } from 'node:crypto';
-import { mkdir, readFile } from 'node:fs/promises';
+import { readFile } from 'node:fs/promises';
 import { dirname, resolve } from 'node:path';
 import { arch, platform } from 'node:os';
 import type { WarningSink } from '../common/errors.js';
 import { InputError, type Warning } from '../common/errors.js';
+import { notFiniteWarning } from '../common/not-finite.js';
 import { compareRequests, runComparisons, type CompareRequest, type Comparison } from '../correlations/index.js';
 import { readRigHead, type Delimiter, type LocatedFormula, type Study } from '../data/index.js';
-import { fitCorrelation, fitResultToJson, POINT_FLAG, type FitInput, type FitResult } from '../fit/index.js';
+import { fitCorrelation, fitPointRows, fitResultToJson, POINT_FLAG, type FitInput, type FitResult } from '../fit/index.js';
 import { fitInputFromStudy, weightingOf, type FitOverrides } from '../fit/from-study.js';
 import { scatterTest, type ScatterTest } from '../fit/weights.js';
 import { commonOutputs, planReduction, poolReduced, poolUncertainties, type PooledTable, type ReducedFile, type ReductionPlan } from '../reduce/index.js';
@@ -21,7 +22,7 @@ import { VERSION } from './program.js';
 import { fileChunks, reduceFile, type InputFile } from './reduce-inputs.js';
 import { jsonReplacer } from './run.js';
 import { vegaRuntime } from './vega-runtime.js';
-import { AtomicFile } from './write-atomic.js';
+import { AtomicFile, makeOutputFolder } from './write-atomic.js';
 
 /**
  * The steps of a fit, shared by `similis fit` (all files pooled) and `similis batch` (each file on
@@ -46,7 +47,7 @@ export async function reduceInputs(
 ): Promise<{ reduced: ReducedFile[]; pooled: PooledInputs; plans: ReductionPlan[] }> {
   const plans = [];
   for (const f of files) {
-    const head = await readRigHead(fileChunks(f.path), { file: f.label, ...(delimiter === undefined ? {} : { delimiter }), sink: ctx.warnings });
+    const head = await readRigHead(fileChunks(f.path, undefined, f.label), { file: f.label, ...(delimiter === undefined ? {} : { delimiter }), sink: ctx.warnings });
     plans.push(planReduction(study, head, where === undefined ? {} : { where }, ctx.warnings));
   }
   const outputs = commonOutputs(plans);
@@ -146,10 +147,19 @@ function usedBy(model: string, name: string): boolean {
   return new RegExp(`(^|[^\\p{L}\\p{Nd}_])${name.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}($|[^\\p{L}\\p{Nd}_])`, 'u').test(model);
 }
 
-/** The JSON contract of `similis fit` (see README): fit, ranges, points, excluded, comparisons. */
-export function fitJson(run: FitRun): Record<string, unknown> {
+/** Stands for the points in fitJson(run, false): NAME.json streams them in its place. */
+const POINTS_STREAMED = 'similis: the points are streamed here';
+/** Points formatted per block when NAME.json is written. */
+const POINT_BLOCK = 10_000;
+
+/**
+ * The JSON contract of `similis fit` (see README): fit, ranges, points, excluded, comparisons.
+ * @param withPoints false: `points` holds a placeholder (jsonText streams them).
+ */
+export function fitJson(run: FitRun, withPoints = true): Record<string, unknown> {
   const { fit, pooled, comparisons, groups } = run;
-  const { points, ranges, ...rest } = fitResultToJson(fit, pooled.rowSource) as { points: unknown[]; ranges: unknown } & Record<string, unknown>;
+  const { points: pointRows, ranges, ...rest } = fitResultToJson(fit, pooled.rowSource, { points: withPoints }) as { points?: unknown[]; ranges: unknown } & Record<string, unknown>;
+  const points = withPoints ? pointRows : POINTS_STREAMED;
   const status = fit.status.converged ? 'converged' : fit.status.code;
   return {
     fit: { ...rest, status, statusDetail: fit.status, weighting: weightingOf(run.study.fit), scatter: run.scatter },
@@ -194,8 +204,12 @@ export interface ReportMeta {
 }
 
 /** The three output texts of a fit: every number (JSON), every point (CSV), the report (HTML). */
-export async function renderFitFiles(run: FitRun, meta: ReportMeta): Promise<{ json: string; csv: string; html: string }> {
+export async function renderFitFiles(run: FitRun, meta: ReportMeta): Promise<{ json: Iterable<string>; csv: Iterable<string>; html: string }> {
   const hashes = await Promise.all(meta.files.map(async (f) => createHash('sha256').update(await readFile(f.path)).digest('hex')));
+  // A value that is not a finite number is announced in all three outputs, never silent.
+  const body = fitJson(run, false);
+  const notFinite = notFiniteWarning(body, 'this report');
+  const warnings = notFinite === undefined ? meta.warnings : [...meta.warnings, notFinite];
   const model = buildReportModel({
     title: meta.title,
     fit: run.fit,
@@ -203,7 +217,7 @@ export async function renderFitFiles(run: FitRun, meta: ReportMeta): Promise<{ j
     rowSource: run.pooled.rowSource,
     groups: run.groups,
     excluded: run.pooled.excluded,
-    warnings: meta.warnings,
+    warnings,
     comparisons: run.comparisons.map((c, i) => reportComparison(c, run.requests[i]!.request.correlation.source)),
     handbookCurves: (grid, held) => handbookCurves(run, grid, held),
     parityBand: meta.parityBand,
@@ -217,9 +231,32 @@ export async function renderFitFiles(run: FitRun, meta: ReportMeta): Promise<{ j
     platform: `${platform()} ${arch()}, Node ${process.version}`,
     command: ['similis', ...meta.argv].map((a) => (/^[\w./=:-]+$/.test(a) ? a : JSON.stringify(a))).join(' '),
   });
-  const json = JSON.stringify({ ...fitJson(run), warnings: meta.warnings.map((w) => ({ code: w.code, message: w.message })) }, jsonReplacer, 2) + '\n';
+  const json = jsonText(run, { ...body, warnings: warnings.map((w) => ({ code: w.code, message: w.message })) });
   const options = meta.interactive === true ? { interactiveRuntime: await vegaRuntime() } : {};
   return { json, csv: pointsCsv(run), html: await renderReportHtml(model, options) };
+}
+
+/**
+ * NAME.json as pieces: the document as JSON.stringify(doc, jsonReplacer, 2) writes it, with the
+ * points formatted a block at a time in place of the placeholder, so that a fit of millions of
+ * rows never builds one object or one string per point for the whole file (a JavaScript string
+ * holds at most about 500 million characters).
+ */
+function* jsonText(run: FitRun, doc: Record<string, unknown>): Generator<string> {
+  const text = JSON.stringify(doc, jsonReplacer, 2) + '\n';
+  const [head, tail] = text.split(JSON.stringify(POINTS_STREAMED)) as [string, string];
+  yield head;
+  if (run.fit.points.y.length === 0) yield '[]';
+  else {
+    yield '[\n';
+    let first = true;
+    for (const rows of fitPointRows(run.fit, run.pooled.rowSource, POINT_BLOCK)) {
+      yield (first ? '' : ',\n') + rows.map((r) => JSON.stringify(r, jsonReplacer, 2).replace(/^/gm, '    ')).join(',\n');
+      first = false;
+    }
+    yield '\n  ]';
+  }
+  yield tail;
 }
 
 /**
@@ -237,14 +274,15 @@ export function outputBase(cwd: string, out: string, files: readonly InputFile[]
 }
 
 /** Writes every target to a temporary file first, then renames them all: all or none. */
-export async function commitTogether(targets: readonly { path: string; label: string; text: string }[]): Promise<void> {
+export async function commitTogether(targets: readonly { path: string; label: string; text: string | Iterable<string> }[]): Promise<void> {
   const files: AtomicFile[] = [];
   try {
     for (const t of targets) {
-      await mkdir(dirname(t.path), { recursive: true });
+      await makeOutputFolder(dirname(t.path), dirname(t.label));
       const f = await AtomicFile.create(t.path, t.label);
       files.push(f);
-      await f.write(t.text);
+      if (typeof t.text === 'string') await f.write(t.text);
+      else for (const piece of t.text) await f.write(piece);
     }
     for (const f of files) await f.commit();
   } catch (e) {
@@ -297,20 +335,25 @@ function medianOf(values: Float64Array | undefined): number {
 }
 
 /** One row per point: file, line, the groups, response, fitted value, residuals, flags. */
-function pointsCsv(run: FitRun): string {
+/** NAME.csv as pieces of POINT_BLOCK lines (see jsonText). */
+function* pointsCsv(run: FitRun): Generator<string> {
   const { fit, pooled, groups } = run;
   const head = ['file', 'line', ...groups, fit.response, 'fitted', 'residual', 'relative_deviation', 'studentized', 'leverage', 'cooks_distance', 'flags'];
-  const lines = [head.join(',')];
+  let lines = [head.join(',')];
   const p = fit.points;
   const cols = groups.map((g) => pooled.columns.get(g)!);
   for (let i = 0; i < pooled.n; i++) {
+    if (lines.length >= POINT_BLOCK) {
+      yield lines.join('\n') + '\n';
+      lines = [];
+    }
     const file = pooled.rowSource.file[pooled.rowSource.fileIndex[i]!]!;
     const flags = flagNames(p.flags[i]!);
     lines.push(
       [csvText(file), pooled.rowSource.line[i], ...cols.map((c) => c[i]), p.y[i], p.fitted[i], p.residual[i], p.relativeDeviation[i], p.studentized[i], p.leverage[i], p.cooksDistance[i], csvText(flags)].join(','),
     );
   }
-  return lines.join('\n') + '\n';
+  yield lines.join('\n') + '\n';
 }
 
 /** Short flag names for the CSV (the JSON and the report carry the worded reasons). */

@@ -30,5 +30,15 @@ if (argv.length === 0 || (argv.length === 1 && (argv[0] === '--help' || argv[0] 
 async function runNormally(): Promise<void> {
   const { processIo } = await import('./io.js');
   const { runCli } = await import('./run.js');
+  const { removeOpenTempFiles } = await import('./write-atomic.js');
+  // Interrupted: remove the temporary files of unfinished outputs (the targets are untouched) and
+  // exit with the shell's code for the signal (128 + 2, 128 + 15).
+  for (const [signal, code] of [['SIGINT', 130], ['SIGTERM', 143]] as const) {
+    process.on(signal, () => {
+      const removed = removeOpenTempFiles();
+      process.stderr.write(`\nsimilis: stopped by ${signal}; ${removed === 0 ? 'no output was being written' : `${removed} unfinished output${removed === 1 ? '' : 's'} removed`}; existing files are unchanged\n`);
+      process.exit(code);
+    });
+  }
   process.exitCode = await runCli(argv, processIo());
 }

@@ -1,5 +1,5 @@
 import { createReadStream } from 'node:fs';
-import { stat } from 'node:fs/promises';
+import { readFile, stat } from 'node:fs/promises';
 import { dirname, isAbsolute, relative, resolve } from 'node:path';
 import { glob } from 'tinyglobby';
 import { InputError } from '../common/errors.js';
@@ -47,7 +47,7 @@ export async function resolveInputs(io: CliIo, args: readonly string[], studyDat
     if (s?.isDirectory() === true) {
       throw new InputError('file-not-found', `${arg} is a folder: name the CSV files, e.g. ${arg}/*.csv`, { file: arg });
     }
-    if (!GLOB_CHARS.test(arg)) throw new InputError('file-not-found', `no such file: ${arg}`, { file: arg });
+    if (!GLOB_CHARS.test(arg)) throw new InputError('file-not-found', `no such file: ${arg}; give the path of an existing rig CSV file (relative to the working folder)`, { file: arg });
     await expand(io, arg, io.cwd, add, { file: arg });
   }
   if (args.length === 0 && studyPath !== null) {
@@ -68,7 +68,7 @@ async function expand(
   where: Located<string>['where'],
 ): Promise<void> {
   const matches = (await glob(pattern.replace(/\\/g, '/'), { cwd: base, absolute: true, onlyFiles: true, expandDirectories: false })).sort();
-  if (matches.length === 0) throw new InputError('data-no-match', `no file matches ${pattern}${base === io.cwd ? '' : ` (in ${displayPath(io, base)})`}`, where);
+  if (matches.length === 0) throw new InputError('data-no-match', `no file matches ${pattern}${base === io.cwd ? '' : ` (in ${displayPath(io, base)})`}: expected at least one rig CSV file; check the folder and the spelling`, where);
   for (const m of matches) await add(resolve(m), displayPath(io, m));
 }
 
@@ -85,11 +85,36 @@ export function displayPath(io: CliIo, path: string): string {
  * The bytes of a file in pieces of 1 MB, counting them for the progress line.
  * @example await readRigTable(fileChunks(path, counter), { file: 'a.csv' })
  */
-export async function* fileChunks(path: string, counter?: { bytes: number }): AsyncGenerator<Uint8Array> {
-  for await (const chunk of createReadStream(path, { highWaterMark: 1 << 20 })) {
-    if (counter !== undefined) counter.bytes += (chunk as Buffer).length;
-    yield chunk as Buffer;
+export async function* fileChunks(path: string, counter?: { bytes: number }, label: string = path): AsyncGenerator<Uint8Array> {
+  try {
+    for await (const chunk of createReadStream(path, { highWaterMark: 1 << 20 })) {
+      if (counter !== undefined) counter.bytes += (chunk as Buffer).length;
+      yield chunk as Buffer;
+    }
+  } catch (e) {
+    throw unreadable(e, label);
   }
+}
+
+/**
+ * The text of an input file (study, report).
+ * @throws {InputError} 'file-unreadable' when the system refuses to read it (permissions, a folder, a vanished file).
+ * @example await readInputText('/data/study.yaml', 'study.yaml')
+ */
+export async function readInputText(path: string, label: string): Promise<string> {
+  try {
+    return await readFile(path, 'utf8');
+  } catch (e) {
+    throw unreadable(e, label);
+  }
+}
+
+/** A read error of the system as bad input; anything else (not a system error) passes unchanged. */
+function unreadable(e: unknown, label: string): unknown {
+  const code = (e as NodeJS.ErrnoException | undefined)?.code;
+  if (typeof code !== 'string') return e;
+  const why = code === 'EACCES' || code === 'EPERM' ? 'no permission to read it' : code === 'EISDIR' ? 'it is a folder' : code === 'ENOENT' ? 'it was removed while similis ran' : (e as Error).message;
+  return new InputError('file-unreadable', `cannot read ${label}: ${why}; give a file you can read`, { file: label }, { cause: e });
 }
 
 /** Files at least this large get a progress line (when stderr is a terminal). */
@@ -128,7 +153,7 @@ export async function reduceFile(ctx: CommandContext, f: InputFile, plan: Reduct
   const counter = { bytes: 0 };
   const progress = progressLine(ctx.io, f, counter);
   try {
-    const table = await readRigTable(fileChunks(f.path, counter), {
+    const table = await readRigTable(fileChunks(f.path, counter, f.label), {
       file: f.label,
       ...(delimiter === undefined ? {} : { delimiter }),
       sink: ctx.warnings,

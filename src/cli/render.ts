@@ -24,11 +24,27 @@ export function caretLines(where: SourceSpan): string[] {
   return [`    ${text}`, `    ${pad}${'^'.repeat(end - start)}`];
 }
 
+/** Longest quoted piece of the user's text a message repeats; longer ones are cut in the middle. */
+const MAX_QUOTED = 120;
+const LONG_QUOTE = new RegExp(`'([^']{${MAX_QUOTED + 1},})'`, 'g');
+/** Longest message printed (a message quoting many long pieces is cut at the end). */
+const MAX_MESSAGE = 2000;
+
+/**
+ * A message with every quoted piece longer than MAX_QUOTED characters cut to its start and end
+ * (a 1 MB cell or formula is not printed back whole).
+ * @example shortenMessage(`'${'x'.repeat(500)}' is not a number`) // => "'xxx…xxx' (500 characters) is not a number"
+ */
+export function shortenMessage(message: string): string {
+  const short = message.replace(LONG_QUOTE, (_m, q: string) => `'${q.slice(0, 60)}…${q.slice(-20)}' (${q.length} characters)`);
+  return short.length > MAX_MESSAGE ? `${short.slice(0, MAX_MESSAGE)}… (message cut; ${short.length} characters)` : short;
+}
+
 /** A bad-input error as a technician reads it: where, what, the caret, the hint. */
 export function renderInputError(e: InputError): string {
   const loc = formatLocation(e.where);
-  const lines = [`similis: error${loc ? ` in ${loc}` : ''}: ${e.message} [${e.kind}]`, ...caretLines(e.where)];
-  if (e.hint !== undefined) lines.push(`  hint: ${e.hint}`);
+  const lines = [`similis: error${loc ? ` in ${loc}` : ''}: ${shortenMessage(e.message)} [${e.kind}]`, ...caretLines(e.where)];
+  if (e.hint !== undefined) lines.push(`  hint: ${shortenMessage(e.hint)}`);
   return lines.join('\n') + '\n';
 }
 
@@ -41,11 +57,11 @@ export function renderWarning(w: Warning): string {
 export function inputErrorJson(e: InputError): object {
   return {
     kind: e.kind,
-    message: e.message,
+    message: shortenMessage(e.message),
     ...(e.where.file === undefined ? {} : { file: e.where.file }),
     ...(e.where.line === undefined ? {} : { line: e.where.line }),
     ...(e.where.column === undefined ? {} : { column: e.where.column }),
-    ...(e.hint === undefined ? {} : { hint: e.hint }),
+    ...(e.hint === undefined ? {} : { hint: shortenMessage(e.hint) }),
   };
 }
 

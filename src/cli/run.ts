@@ -1,5 +1,6 @@
 import { CommanderError } from 'commander';
 import { InputError, WarningList } from '../common/errors.js';
+import { notFiniteWarning } from '../common/not-finite.js';
 import type { CommandContext, CommandOutcome } from './context.js';
 import { EXIT, type CliIo, type ExitCode } from './io.js';
 import { buildProgram } from './program.js';
@@ -46,15 +47,23 @@ export async function runCli(argv: readonly string[], io: CliIo): Promise<ExitCo
     // A bare `similis` prints help (commander handles it); nothing else ends here.
     return EXIT.ok;
   }
+  // Read once: a command may build its JSON document only when asked (a getter).
+  const doc = context.json ? outcome.json : undefined;
+  if (doc !== undefined) {
+    const w = notFiniteWarning(doc, 'the JSON output');
+    if (w !== undefined) context.warnings.warn(w);
+  }
   const warnings = context.warnings.items;
-  if (context.json) {
-    io.stdout(JSON.stringify({ ...outcome.json, warnings: warnings.map(warningJson) }, jsonReplacer, 2) + '\n');
+  if (doc !== undefined) {
+    io.stdout(JSON.stringify({ ...doc, warnings: warnings.map(warningJson) }, jsonReplacer, 2) + '\n');
   } else {
     io.stdout(outcome.text);
   }
   for (const w of warnings) io.stderr(renderWarning(w));
   return strict && warnings.length > 0 ? EXIT.warningsAsErrors : EXIT.ok;
 }
+
+const USAGE_HINT = "the options and arguments each command expects are listed by 'similis COMMAND --help'";
 
 /**
  * Prints a failure and returns its exit code: 2 for bad input (InputError, usage errors), 3 for
@@ -66,7 +75,8 @@ export function handleFailure(e: unknown, io: CliIo, json: boolean, context: Com
       return EXIT.ok;
     }
     // commander has written its message (unknown option, missing argument...) to stderr.
-    if (json) io.stdout(JSON.stringify({ error: { kind: 'usage', message: e.message.replace(/^error: /, '') } }) + '\n');
+    io.stderr(`  hint: ${USAGE_HINT} [usage]\n`);
+    if (json) io.stdout(JSON.stringify({ error: { kind: 'usage', message: e.message.replace(/^error: /, ''), hint: USAGE_HINT } }) + '\n');
     return EXIT.badInput;
   }
   for (const w of context?.warnings.items ?? []) io.stderr(renderWarning(w));
@@ -88,7 +98,8 @@ export function handleFailure(e: unknown, io: CliIo, json: boolean, context: Com
 
 /**
  * JSON has no NaN or Infinity; writing them as null would hide them. They are written as the
- * strings "NaN", "Infinity", "-Infinity" so that a script sees them and can decide.
+ * strings "NaN", "Infinity", "-Infinity" so that a script sees them and can decide, and the
+ * document carries a 'not-finite' warning naming where they are (notFiniteWarning).
  */
 export function jsonReplacer(_key: string, value: unknown): unknown {
   if (typeof value === 'number' && !Number.isFinite(value)) return String(value);

@@ -1,9 +1,10 @@
-import { readFile, stat } from 'node:fs/promises';
+import { stat } from 'node:fs/promises';
 import { resolve } from 'node:path';
 import { InputError } from '../common/errors.js';
 import { applyStudyFlags, DATA_ERROR, emptyStudy, loadStudy, STUDY_MAX_BYTES, type Delimiter, type Study } from '../data/index.js';
 import { REDUCE_ERROR, reduceMessages } from '../reduce/index.js';
 import type { CommandContext } from './context.js';
+import { readInputText } from './reduce-inputs.js';
 
 /**
  * The study side of the commands that read rig files (reduce, fit): the study file named by
@@ -26,11 +27,11 @@ export async function studyFor(ctx: CommandContext, opts: StudyOptions): Promise
   if (opts.study !== undefined) {
     studyPath = resolve(ctx.io.cwd, opts.study);
     const s = await stat(studyPath).catch(() => undefined);
-    if (s === undefined || !s.isFile()) throw new InputError('file-not-found', `no such study file: ${opts.study}`, { file: opts.study });
+    if (s === undefined || !s.isFile()) throw new InputError('file-not-found', `no such study file: ${opts.study}; give the path of an existing study file (YAML)`, { file: opts.study });
     if (s.size > STUDY_MAX_BYTES) {
       throw new InputError(DATA_ERROR.studyLimits, `the study file is ${s.size} bytes long; the limit is ${STUDY_MAX_BYTES}`, { file: opts.study });
     }
-    study = loadStudy(await readFile(studyPath, 'utf8'), opts.study, ctx.warnings);
+    study = loadStudy(await readInputText(studyPath, opts.study), opts.study, ctx.warnings);
   }
   study = applyStudyFlags(study, { constants: opts.const ?? [], derive: opts.derive ?? [], group: opts.group ?? [] }, ctx.warnings);
   if (study.derived.length === 0 && study.groups.length === 0) {

@@ -1,6 +1,8 @@
 import { randomBytes } from 'node:crypto';
-import { open, rename, stat, unlink, type FileHandle } from 'node:fs/promises';
+import { unlinkSync } from 'node:fs';
+import { mkdir, open, readdir, rename, stat, unlink, type FileHandle } from 'node:fs/promises';
 import { basename, dirname, join } from 'node:path';
+import { BroadcastChannel, isMainThread } from 'node:worker_threads';
 import { InputError } from '../common/errors.js';
 
 /**
@@ -10,7 +12,78 @@ import { InputError } from '../common/errors.js';
  * rename(2); on Windows, MoveFileEx with replace), so a reader sees the old file or the new one,
  * never half of one. On any failure the temporary file is removed and an existing target is left
  * exactly as it was.
+ *
+ * Signals: every temporary file open in the process (worker threads included: they announce theirs
+ * on a BroadcastChannel) is known to `removeOpenTempFiles`, which src/cli/main.ts calls on SIGINT
+ * and SIGTERM before exiting with 130 or 143. A process killed outright (SIGKILL, power loss)
+ * cannot clean up: its temporary file stays beside the target, which is untouched. Such stale files
+ * are recognised by their name (`.TARGET.PID.RANDOM.tmp`) and removed by the next write of the same
+ * target once no process with that PID is running.
  */
+
+/** Temporary files this process has open (in the main thread: those of its workers too). */
+const openTemps = new Set<string>();
+/** Worker threads announce their temporary files to the main thread here. */
+const announce = new BroadcastChannel('similis-atomic-temp-files');
+announce.unref();
+if (isMainThread) {
+  announce.onmessage = (event) => {
+    const m = (event as { data: { add?: string; remove?: string } }).data;
+    if (m.add !== undefined) openTemps.add(m.add);
+    if (m.remove !== undefined) openTemps.delete(m.remove);
+  };
+}
+
+function track(tempPath: string, open: boolean): void {
+  if (open) openTemps.add(tempPath);
+  else openTemps.delete(tempPath);
+  if (!isMainThread) announce.postMessage(open ? { add: tempPath } : { remove: tempPath });
+}
+
+/**
+ * Removes every temporary file still open in the process, synchronously (for a signal handler:
+ * the targets are untouched). Returns how many were removed.
+ * @example process.on('SIGTERM', () => { removeOpenTempFiles(); process.exit(143); })
+ */
+export function removeOpenTempFiles(): number {
+  let removed = 0;
+  for (const p of openTemps) {
+    try {
+      unlinkSync(p);
+      removed++;
+    } catch {
+      // already renamed or removed
+    }
+  }
+  openTemps.clear();
+  return removed;
+}
+
+/** Whether a process with this id is running (EPERM: it runs, under another user). */
+function processRuns(pid: number): boolean {
+  try {
+    process.kill(pid, 0);
+    return true;
+  } catch (e) {
+    return (e as NodeJS.ErrnoException).code === 'EPERM';
+  }
+}
+
+/**
+ * Removes temporary files of `target` left by a process that was killed outright (its PID no
+ * longer runs); files of running processes are left alone.
+ */
+async function removeStaleTemps(target: string): Promise<void> {
+  const prefix = `.${basename(target)}.`;
+  const names = await readdir(dirname(target)).catch(() => [] as string[]);
+  for (const name of names) {
+    if (!name.startsWith(prefix)) continue;
+    const m = /^(\d+)\.[0-9a-f]{12}\.tmp$/.exec(name.slice(prefix.length));
+    if (m === null) continue;
+    const pid = Number(m[1]);
+    if (pid !== process.pid && !processRuns(pid)) await unlink(join(dirname(target), name)).catch(() => undefined);
+  }
+}
 
 /** Characters gathered before one write call. */
 const BUFFER_CHARS = 1 << 20;
@@ -44,6 +117,7 @@ export class AtomicFile {
     if (existing?.isDirectory() === true) {
       throw new InputError('output-path', `cannot write ${label}: it is a folder; give a file name such as ${join(label, 'reduced.csv')}`, { file: label });
     }
+    await removeStaleTemps(target);
     const tempPath = join(dirname(target), `.${basename(target)}.${process.pid}.${randomBytes(6).toString('hex')}.tmp`);
     let handle: FileHandle;
     try {
@@ -53,6 +127,7 @@ export class AtomicFile {
       const why = code === 'ENOENT' ? `the folder ${dirname(label)} does not exist` : code === 'EACCES' || code === 'EPERM' ? `no permission to write in ${dirname(label)}` : String((e as Error).message);
       throw new InputError('output-path', `cannot write ${label}: ${why}`, { file: label }, { cause: e });
     }
+    track(tempPath, true);
     // The umask applied at open; an existing file's permissions are kept exactly.
     if (existing !== undefined) await handle.chmod(existing.mode & 0o777).catch(() => undefined);
     return new AtomicFile(target, tempPath, handle);
@@ -88,6 +163,7 @@ export class AtomicFile {
       await this.handle.close();
       await rename(this.tempPath, this.target);
       this.done = true;
+      track(this.tempPath, false);
     } catch (e) {
       await this.abort();
       throw e;
@@ -102,6 +178,7 @@ export class AtomicFile {
     await this.inflight.catch(() => undefined);
     await this.handle.close().catch(() => undefined);
     await unlink(this.tempPath).catch(() => undefined);
+    track(this.tempPath, false);
   }
 }
 
@@ -120,6 +197,27 @@ export async function writeFileAtomic(target: string, produce: (write: (data: st
     throw e;
   }
   await file.commit();
+}
+
+/**
+ * Makes an output folder and its parents (nothing when it exists).
+ * @param label the folder as the user wrote it, for messages
+ * @throws {InputError} 'output-path' when a part of the path is a file or the folder cannot be made.
+ * @example await makeOutputFolder('/data/reports', 'reports')
+ */
+export async function makeOutputFolder(folder: string, label: string = folder): Promise<void> {
+  try {
+    await mkdir(folder, { recursive: true });
+  } catch (e) {
+    const code = (e as NodeJS.ErrnoException).code;
+    const why =
+      code === 'ENOTDIR' || code === 'EEXIST'
+        ? 'a part of that path is a file, not a folder'
+        : code === 'EACCES' || code === 'EPERM' || code === 'EROFS'
+          ? 'no permission to make it'
+          : String((e as Error).message);
+    throw new InputError('output-path', `cannot make the folder ${label}: ${why}; give an output path inside a folder you can write`, { file: label }, { cause: e });
+  }
 }
 
 /** Makes the rename durable (POSIX: fsync the folder); skipped where folders cannot be opened. */

@@ -35,7 +35,7 @@ export const dataMessages = {
     `${text} may be a number with a decimal comma, which splits it into two cells: write decimal points, or separate cells with ; and still write decimal points`,
   noHeader: (lines: number) =>
     lines === 0 ? 'the file is empty: expected a header row of cells such as Q [L/min],dp [kPa]' : `no header row: the file has ${lines} lines, all blank or starting with #; expected a header row of cells such as Q [L/min],dp [kPa]`,
-  noRows: (headerLine: number) => `the header (line ${headerLine}) is followed by no data rows`,
+  noRows: (headerLine: number) => `the header (line ${headerLine}) is followed by no data rows: expected at least one row of values under it`,
   lateConstant: (headerLine: number) =>
     `this line looks like a constant or uncertainty but comes after the header (line ${headerLine}): it is kept as a comment; move it above the header to use it`,
 
@@ -74,7 +74,9 @@ export const dataMessages = {
     `a percentage of it means nothing (1 % of 20 degC is 0.2 K, of the same 293.15 K 2.9 K); give the uncertainty as a temperature, e.g. 0.1 K or 0.2 ${unit}`,
 
   // Study files
-  studyYaml: (reason: string) => `the study file is not valid YAML: ${reason}`,
+  studyYaml: (reason: string, found: string) => `the study file is not valid YAML: ${reason}${found === '' ? '' : ` (at '${found}')`}`,
+  studyYamlHint: () => 'expected plain YAML: NAME: value lines, sections indented under their key, lists in [ ] or as - items',
+  studyTag: (tag: string) => `the YAML tag ${tag} is not allowed: a study file holds plain text, numbers, lists and mappings (no tags, so nothing is constructed from the file); remove the tag`,
   studyTooLarge: (bytes: number, limit: number) => `the study file is ${bytes} bytes long; the limit is ${limit} (a study file holds formulas and settings, not data)`,
   studyAliases: () => 'the study file uses too many YAML aliases (*name): expand them, or write the values out',
   studyNotMapping: (found: string) => `a study file is a mapping of keys (title, constants, derived, groups, fit...), found ${found}`,

@@ -45,12 +45,22 @@ export function parseStudyYaml(text: string, file: string): YamlSource {
     uniqueKeys: true,
     prettyErrors: false,
     strict: true,
+    // YAML 1.1's !!binary, !!set, !!omap, !!pairs and !!timestamp would build objects: refused as unknown tags.
+    resolveKnownTags: false,
   });
   const source: YamlSource = { file, text: text.charCodeAt(0) === 0xfeff ? text.slice(1) : text, doc, counter };
   const problem = doc.errors[0] ?? doc.warnings.find((w) => w.code === 'TAG_RESOLVE_FAILED');
   if (problem !== undefined) {
     const where = spanAt(source, problem.pos[0], problem.pos[1]);
-    throw new InputError(DATA_ERROR.studyYaml, dataMessages.studyYaml(problem.message.replace(/ at line \d+, column \d+.*$/s, '')), where);
+    // The text where the parser stopped, to the end of its line (at most 40 characters).
+    const lineEnd = source.text.indexOf('\n', problem.pos[0]);
+    const found = source.text.slice(problem.pos[0], Math.min(lineEnd === -1 ? source.text.length : lineEnd, problem.pos[0] + 40)).trim();
+    if (problem.code === 'TAG_RESOLVE_FAILED') {
+      const tag = /^!\S*/.exec(found)?.[0] ?? found;
+      throw new InputError(DATA_ERROR.studyYaml, dataMessages.studyTag(tag), where);
+    }
+    const reason = problem.message.replace(/ at line \d+, column \d+.*$/s, '');
+    throw new InputError(DATA_ERROR.studyYaml, dataMessages.studyYaml(reason, found), where, { hint: dataMessages.studyYamlHint() });
   }
   try {
     doc.toJS({ maxAliasCount: MAX_ALIAS_COUNT });

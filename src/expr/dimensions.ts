@@ -113,7 +113,7 @@ class DimensionWalker {
     if (this.isZero(node.right)) return a;
     const verb = node.op === '+' ? 'add' : node.op === '-' ? 'subtract' : 'compare';
     const message = msg.cannotCombine(verb, this.text(node.left), a, this.text(node.right), b);
-    throw formulaError(FORMULA_ERROR.dimension, message, this.formula.text, node.span);
+    throw formulaError(FORMULA_ERROR.dimension, message, this.formula.text, node.span, msg.sameDimensionHint(verb));
   }
 
   private power(node: BinaryNode, base: Dimension, exponent: Dimension): Dimension {

@@ -43,10 +43,10 @@ const TYPOGRAPHIC: ReadonlyMap<string, string> = new Map([
 
 /** Advice for characters that cannot begin a token. */
 function adviceFor(ch: string): string {
-  if (ch === '`' || ch === '"' || ch === "'") return 'names and numbers are written without quotes';
-  if (ch === '[' || ch === ']' || ch === '{' || ch === '}') return 'group with ( and ) only';
+  if (ch === '`' || ch === '"' || ch === "'") return 'write names and numbers without quotes';
+  if (ch === '[' || ch === ']' || ch === '{' || ch === '}') return 'use ( and ) to group';
   if (ch === ';') return 'a formula is one expression; write each quantity as its own formula';
-  if (ch === '#') return 'a formula cannot hold a comment';
+  if (ch === '#') return 'a formula cannot hold a comment: remove it';
   if (ch === '%') return 'there is no % operator; divide by 100 if a percentage is meant';
   if (ch === '$' || ch === '@' || ch === '\\' || ch === '?' || ch === ':' || ch === '~') return 'expected a number, a name, an operator or a parenthesis';
   return 'expected a number, a name, an operator or a parenthesis';

@@ -70,7 +70,7 @@ export const msg = {
       max === Infinity ? `at least ${min} arguments` : min === max ? `${min} argument${min === 1 ? '' : 's'}` : `${min} to ${max} arguments`;
     return `${name} takes ${want}, found ${found}`;
   },
-  tooDeep: (limit: number) => `the formula nests deeper than ${limit} levels (parentheses, signs, powers and calls)`,
+  tooDeep: (limit: number) => `the formula nests deeper than ${limit} levels (parentheses, signs, powers and calls), the limit: split it into named intermediate quantities`,
   tooTall: (limit: number) => `the formula is a chain of more than ${limit} operations: split it into named intermediate quantities`,
   unknownName: (name: string, nearest: readonly string[]) =>
     nearest.length === 0
@@ -92,6 +92,8 @@ export const msg = {
     verb === 'subtract'
       ? `cannot subtract ${quoted(b, db)} from ${quoted(a, da)}`
       : `cannot ${verb} ${quoted(a, da)} ${verb === 'add' ? 'and' : 'with'} ${quoted(b, db)}`,
+  sameDimensionHint: (verb: 'add' | 'subtract' | 'compare') =>
+    `the two sides of ${verb === 'compare' ? 'a comparison' : verb === 'add' ? 'a sum' : 'a difference'} must have the same dimension: check the units and the formula`,
   exponentHasDimension: (exponent: string, d: Dimension) =>
     `the exponent ${quoted(exponent, d)} must be dimensionless`,
   exponentNotConstant: (base: string, db: Dimension, exponent: string) =>

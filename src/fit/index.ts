@@ -13,7 +13,7 @@
  * The numerical pieces are exported too, for the segmented and regime fits and for tests.
  */
 export { fitCorrelation } from './fit-correlation.js';
-export { fitResultToJson, type PointRow } from './to-json.js';
+export { fitPointRows, fitResultToJson, type PointRow } from './to-json.js';
 export type {
   BandFunction,
   BandValues,

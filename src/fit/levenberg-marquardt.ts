@@ -71,6 +71,14 @@ export interface LmOutcome {
  * // y = b1*(1 - exp(-b2*x)) (NIST StRD Misra1a) from start (500, 1e-4) converges to
  * // b1 = 238.94212918, b2 = 5.5015643181e-4 (NIST certified values).
  */
+/**
+ * Scaled gradient (largest |cosine| between the residuals and a Jacobian column) above which a
+ * met reduction or step test is reported as 'stalled': at a least-squares minimum it is 0 (the
+ * residuals are orthogonal to the columns), whatever the noise. Common practice, no source: far
+ * above the rounding level of the cosines and far below a direction the fit still could follow.
+ */
+const STALLED_GRADIENT = 1e-2;
+
 export function levenbergMarquardt(
   model: LmModel,
   y: Float64Array,
@@ -95,7 +103,9 @@ export function levenbergMarquardt(
       if (accepted) run.accept(t.fnorm1);
       else run.reject();
       const status = stoppingTest(t.actred, t.prered, t.ratio, run.delta, run.xnorm, gnorm, options);
-      if (status !== undefined) return run.outcome(status, iteration);
+      // A reduction or step test met far from stationarity (the trust region collapsed after a
+      // jump, e.g. exp(a*x) started where it underflows) is no convergence.
+      if (status !== undefined) return run.outcome(status.converged && gnorm > STALLED_GRADIENT ? LM_STATUS.stalled : status, iteration);
       if ((iteration >= options.maxIterations && accepted) || run.evaluations >= options.maxEvaluations) {
         return run.outcome(LM_STATUS.iterationLimit, iteration);
       }

@@ -169,7 +169,8 @@ export function relativeReduction(cross: number, fnorm: number): number {
 
 /** Bates & Watts' relative offset; Infinity when it is undefined (n = p, or zero residuals). */
 export function relativeOffset(qtf: Float64Array, orthogonalSquares: number, n: number, p: number): number {
-  if (n <= p || !(orthogonalSquares > 0)) return Infinity;
+  // An overflowed sum of squares (model values near 1e154 and above) says nothing about the offset.
+  if (n <= p || !(orthogonalSquares > 0) || !Number.isFinite(orthogonalSquares)) return Infinity;
   const inPlane = euclideanNorm(qtf);
   return inPlane / Math.sqrt(p) / Math.sqrt(orthogonalSquares / (n - p));
 }

@@ -30,6 +30,11 @@ export const LM_STATUS = {
   stepAtRounding: status('step-at-rounding', true, 'converged: no smaller step is possible in double precision'),
   gradientAtRounding: status('gradient-at-rounding', true, 'converged: the scaled gradient is zero to double precision'),
   iterationLimit: status('iteration-limit', false, 'not converged: the iteration limit was reached'),
+  stalled: status(
+    'stalled',
+    false,
+    'not converged: the steps became too small while the residuals still run along a Jacobian column (the point is no minimum); the start values may be too far from the solution',
+  ),
   startNotFinite: status('start-not-finite', false, 'failed: the model gives a non-finite value at the start values'),
   jacobianNotFinite: status('jacobian-not-finite', false, 'failed: a derivative of the model is not finite at the current point'),
 } as const;

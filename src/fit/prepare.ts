@@ -85,7 +85,7 @@ export function prepareFit(input: FitInput): PreparedFit {
     } else if (constants.has(name)) {
       scalarNames.push(name);
     } else {
-      throw new InputError(FIT_ERROR.parameters, msg.noStart(name), {}, { hint: `columns: ${[...columns.keys()].join(', ')}` });
+      throw new InputError(FIT_ERROR.parameters, msg.noStart(name), {}, { hint: `a name of the model that is no column is a parameter: give its start value (fit.parameters, or --param ${name}=START), or use one of the columns ${[...columns.keys()].join(', ')}` });
     }
   }
   const weights = input.weights;

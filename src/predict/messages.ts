@@ -37,10 +37,10 @@ const list = (names: readonly string[]): string => names.join(', ');
 export const predictMessages = {
   notAReport: (what: string) => `this is not a similis fit report with a predict section (${what}); write one with similis fit --out or similis batch`,
   atSyntax: (text: string) => `--at ${text}: expected NAME=VALUE pairs separated by commas, e.g. --at Re=5e4,LD=120 or --at Q="30 L/min",T="40 degC"`,
-  atTwice: (name: string) => `--at gives ${name} twice`,
+  atTwice: (name: string) => `--at gives ${name} twice: give each name once`,
   groupHasUnit: (name: string, text: string) => `${name} is a dimensionless group of the correlation; '${text}' has a unit: give the number alone`,
   unknownName: (name: string, groups: readonly string[], inputs: readonly string[]) =>
-    `${name} is neither a group of the correlation (${list(groups)}) nor a quantity its groups are computed from (${inputs.length === 0 ? 'none recorded' : list(inputs)})`,
+    `${name} is neither a group of the correlation nor a quantity its groups are computed from: expected one of the groups ${list(groups)}${inputs.length === 0 ? '' : ` or the quantities ${list(inputs)}`}`,
   missingGroups: (missing: readonly string[]) => `no value for ${list(missing)}: give ${missing.length === 1 ? 'it' : 'them'} in --at (a group as a number, or the quantities it is computed from)`,
   missingInputs: (missing: readonly string[], needed: string) => `to compute ${needed} from quantities, also give ${list(missing)} in --at (with units)`,
   constantDiffers: (name: string, values: string) => `${name} differs between the files of the fit (${values}): give it in --at`,

@@ -48,11 +48,12 @@ export const unitMessages = {
   unknown: (name: string): string => `unknown unit '${name}'`,
   lonePrefix: (name: string, prefixName: string): string =>
     `'${name}' is the prefix ${prefixName} without a unit (write e.g. ${name}m or ${name}s)`,
+  seeList: (): string => 'similis units --list shows the known units and how to write them',
   didYouMean: (suggestions: readonly string[]): string => `did you mean ${suggestions.join(', ')}?`,
   caseMatters: (name: string, suggestions: readonly string[]): string =>
     `unit symbols are case-sensitive ('${name}' is not known); did you mean ${suggestions.join(', ')}?`,
   prefixNotAllowed: (written: string, prefixSymbol: string, prefixName: string, unit: string, unitName: string): string =>
-    `'${written}': the prefix ${prefixSymbol} (${prefixName}) cannot go on ${unit} (${unitName}), which takes no SI prefix`,
+    `'${written}': the prefix ${prefixSymbol} (${prefixName}) cannot go on ${unit} (${unitName}), which takes no SI prefix: write it without the prefix, or use an SI unit`,
   gaugePressure: (name: string, base: string): string =>
     `${name} is a gauge pressure (measured above the ambient pressure), which no unit factor can make ` +
     `absolute: give the column in ${base} and treat it as a pressure difference from the ambient, or ` +

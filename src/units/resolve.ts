@@ -97,6 +97,6 @@ function unknownName(name: string, site: NameSite): InputError {
       ? unitMessages.caseMatters(name, suggestions)
       : suggestions.length > 0
         ? unitMessages.didYouMean(suggestions)
-        : undefined;
+        : unitMessages.seeList();
   return unitError('unit-unknown', unitMessages.unknown(name), site.text, site.start, site.end, hint);
 }

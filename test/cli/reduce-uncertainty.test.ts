@@ -100,7 +100,7 @@ describe('similis reduce with uncertainties', () => {
   });
 });
 
-describe('similis reduce --monte-carlo (runReduce; the option is declared in program.ts)', () => {
+describe('similis reduce --monte-carlo (runReduce, and once through the command line)', () => {
   const ctx = () => ({ io: memoryIo(folder.root), json: true, warnings: new WarningList(), argv: [] });
   it('checks each output and puts the check in the budgets; no warning where first order holds', async () => {
     const c = ctx();
@@ -125,6 +125,11 @@ describe('similis reduce --monte-carlo (runReduce; the option is declared in pro
     await runReduce(c2, ['a.csv'], { study: 'study.yaml', monteCarlo: '5000' });
     expect(c2.warnings.items.filter((w) => w.code === 'uncertainty-nonlinear').map((w) => w.message.slice(0, 4))).toEqual(['u(f)']);
     big.remove();
+  });
+  it('is an option of the command line (it was documented but undeclared: unknown option)', async () => {
+    const r = await folder.run('reduce', 'loop-a.csv', '--study', 'study.yaml', '--monte-carlo', '1000', '--json');
+    expect(r.code, r.err).toBe(0);
+    expect((JSON.parse(r.out) as Doc).budgets.map((b) => b.monteCarlo?.samples)).toEqual([1000, 1000, 1000]);
   });
   it('refuses a count that is not a whole number (usage) or below 100 (reduce-monte-carlo)', async () => {
     expect((await inputErrorAsync(() => runReduce(ctx(), ['loop-a.csv'], { study: 'study.yaml', monteCarlo: '1e4x' }))).kind).toBe('usage');

@@ -1,5 +1,4 @@
 import { availableParallelism } from 'node:os';
-import { mkdir } from 'node:fs/promises';
 import { join, resolve } from 'node:path';
 import { InputError, WarningList } from '../../common/errors.js';
 import { whereFlag } from '../../data/index.js';
@@ -13,6 +12,7 @@ import type { CommandContext, CommandOutcome } from '../context.js';
 import { commitTogether } from '../fit-pipeline.js';
 import { jsonReplacer } from '../run.js';
 import { delimiterOption, studyFor, type StudyOptions } from '../study-input.js';
+import { makeOutputFolder } from '../write-atomic.js';
 
 /**
  * `similis batch <folders, files or globs...> --study study.yaml --out reports/CAMPAIGN`: every
@@ -49,7 +49,7 @@ export async function runBatch(ctx: CommandContext, inputs: readonly string[], o
   const outLabel = opts.out.replace(/[\\/]+$/, '') || '.';
   const names = outputNames(files.map((f) => f.label));
   checkNotInputs(outDir, names, files.map((f) => f.path));
-  await mkdir(join(outDir, 'files'), { recursive: true });
+  await makeOutputFolder(join(outDir, 'files'), outLabel);
 
   const setup: BatchSetup = {
     cwd: ctx.io.cwd,

@@ -1,11 +1,10 @@
-import { readFile } from 'node:fs/promises';
 import { InputError } from '../../common/errors.js';
 import { whereFlag } from '../../data/index.js';
 import type { FitOverrides } from '../../fit/from-study.js';
 import type { CommandContext, CommandOutcome } from '../context.js';
 import { commitTogether, fitJson, fitPooled, outputBase, reduceInputs, renderFitFiles, type FitRun } from '../fit-pipeline.js';
 import { formatNumber, formatTable } from '../format.js';
-import { resolveInputs } from '../reduce-inputs.js';
+import { readInputText, resolveInputs } from '../reduce-inputs.js';
 import { delimiterOption, studyFor, type StudyOptions } from '../study-input.js';
 
 /**
@@ -37,7 +36,7 @@ export async function runFit(ctx: CommandContext, inputs: readonly string[], opt
   if (target !== null) {
     const texts = await renderFitFiles(run, {
       files,
-      studyText: studyPath === null ? null : { name: opts.study!, text: await readFile(studyPath, 'utf8') },
+      studyText: studyPath === null ? null : { name: opts.study!, text: await readInputText(studyPath, opts.study!) },
       title: study.title ?? `${run.fit.response} = ${run.fit.model}`,
       parityBand,
       argv: ctx.argv,
@@ -48,7 +47,13 @@ export async function runFit(ctx: CommandContext, inputs: readonly string[], opt
     await commitTogether(targets);
     written = targets.map((t) => t.label);
   }
-  return { text: summaryText(run, written), json: fitJson(run) };
+  // The JSON document (every point) is built only when --json asks for it.
+  return {
+    text: summaryText(run, written),
+    get json() {
+      return fitJson(run);
+    },
+  };
 }
 
 function parityBandOf(text: string | undefined): number {

@@ -1,4 +1,4 @@
-import { readFile, stat } from 'node:fs/promises';
+import { stat } from 'node:fs/promises';
 import { resolve } from 'node:path';
 import { InputError, type SourceSpan, type Warning } from '../../common/errors.js';
 import { DATA_ERROR, loadStudy, readRigHead, STUDY_MAX_BYTES, type Study } from '../../data/index.js';
@@ -15,7 +15,7 @@ import { PROPERTY_FUNCTIONS } from '../../properties/index.js';
 import { parseUnit } from '../../units/index.js';
 import type { CommandContext, CommandOutcome } from '../context.js';
 import { formatTable } from '../format.js';
-import { fileChunks, resolveInputs } from '../reduce-inputs.js';
+import { fileChunks, readInputText, resolveInputs } from '../reduce-inputs.js';
 
 /**
  * `similis groups`: the dimensionless groups of a problem (Buckingham Pi), recognised against
@@ -75,7 +75,7 @@ export async function runGroups(ctx: CommandContext, files: readonly string[], o
   };
   if (files.length > 0 || (study !== null && study.study.data.length > 0)) {
     for (const f of await resolveInputs(ctx.io, files, study?.study.data ?? [], study?.path ?? null)) {
-      const head = await readRigHead(fileChunks(f.path), { file: f.label, sink: ctx.warnings });
+      const head = await readRigHead(fileChunks(f.path, undefined, f.label), { file: f.label, sink: ctx.warnings });
       for (const c of head.columns) {
         if (c.hasUnit) add({ input: toInput(c.name, c.unit), unit: c.unit.text, source: f.label, where: c.where, varied: true }, false);
         else skipped.add(c.name);
@@ -108,11 +108,11 @@ export async function runGroups(ctx: CommandContext, files: readonly string[], o
 async function readStudy(ctx: CommandContext, file: string): Promise<{ study: Study; path: string }> {
   const path = resolve(ctx.io.cwd, file);
   const s = await stat(path).catch(() => undefined);
-  if (s === undefined || !s.isFile()) throw new InputError('file-not-found', `no such study file: ${file}`, { file });
+  if (s === undefined || !s.isFile()) throw new InputError('file-not-found', `no such study file: ${file}; give the path of an existing study file (YAML)`, { file });
   if (s.size > STUDY_MAX_BYTES) {
     throw new InputError(DATA_ERROR.studyLimits, `the study file is ${s.size} bytes long; the limit is ${STUDY_MAX_BYTES}`, { file });
   }
-  return { study: loadStudy(await readFile(path, 'utf8'), file, ctx.warnings), path };
+  return { study: loadStudy(await readInputText(path, file), file, ctx.warnings), path };
 }
 
 /** The study's groups against the variables: columns count as varied, constants as fixed. */

@@ -1,4 +1,4 @@
-import { readFile, stat } from 'node:fs/promises';
+import { stat } from 'node:fs/promises';
 import { resolve } from 'node:path';
 import { InputError } from '../../common/errors.js';
 import {
@@ -16,6 +16,7 @@ import {
   type PredictionRecipe,
 } from '../../predict/index.js';
 import type { CommandContext, CommandOutcome } from '../context.js';
+import { readInputText } from '../reduce-inputs.js';
 import { formatNumber, formatTable } from '../format.js';
 
 /**
@@ -68,11 +69,12 @@ export async function runPredict(ctx: CommandContext, report: string, opts: Pred
 async function loadRecipe(ctx: CommandContext, report: string): Promise<PredictionRecipe> {
   const path = resolve(ctx.io.cwd, report);
   const s = await stat(path).catch(() => undefined);
-  if (s === undefined || !s.isFile()) throw new InputError('file-not-found', `no such fit report: ${report}`, { file: report });
+  if (s === undefined || !s.isFile()) throw new InputError('file-not-found', `no such fit report: ${report}; give the NAME.json written by similis fit --out or similis batch`, { file: report });
   if (s.size > REPORT_MAX_BYTES) throw new InputError(PREDICT_ERROR.json, predictMessages.notAReport(`it is ${s.size} bytes long`), { file: report });
+  const text = await readInputText(path, report);
   let doc: unknown;
   try {
-    doc = JSON.parse(await readFile(path, 'utf8'));
+    doc = JSON.parse(text);
   } catch (e) {
     throw new InputError(PREDICT_ERROR.json, predictMessages.notAReport(`it is not JSON: ${(e as Error).message}`), { file: report }, { cause: e });
   }

@@ -61,7 +61,7 @@ export async function runReduce(ctx: CommandContext, inputs: readonly string[], 
   // Pass 1: every file's head against the study, before any row is read.
   const plans: ReductionPlan[] = [];
   for (const f of files) {
-    const head = await readRigHead(fileChunks(f.path), { file: f.label, ...(delimiter === undefined ? {} : { delimiter }), sink: ctx.warnings });
+    const head = await readRigHead(fileChunks(f.path, undefined, f.label), { file: f.label, ...(delimiter === undefined ? {} : { delimiter }), sink: ctx.warnings });
     plans.push(planReduction(study, head, planOptions, ctx.warnings));
   }
   const outputs = commonOutputs(plans);
