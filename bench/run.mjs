@@ -516,8 +516,71 @@ async function benchBatch(runs = 3) {
   }
 }
 
-/** `node bench/run.mjs [section...]` runs only the sections named (startup, formula, ...); none: all. */
+/**
+ * Opt-in (`node bench/run.mjs large`, not part of a plain `npm run bench`: about 3 minutes and
+ * 1.5 GB of temporary files): a 10,000,000-row rig file (invented water-loop log: Q, dp and T,
+ * D, L as # constants; about 200 MB) written to os.tmpdir(), then `similis reduce -o` and
+ * `similis fit --out` on it in a child process each. Prints wall time, the peak resident memory of
+ * each child (maxRSS by an --import hook) and the sizes of what they wrote. Target: memory grows
+ * with the rows only as columns of doubles (Float64Arrays of 80 MB each at 10 million rows) and
+ * small objects, never as strings per row: no crash at 10 million rows.
+ */
+async function benchLarge(rows = Number(process.env.SIMILIS_BENCH_ROWS ?? 10_000_000)) {
+  section(`large inputs: ${rows.toLocaleString('en-US')} rows (child processes, one run each)`);
+  const { mkdtempSync, writeFileSync, rmSync, statSync, openSync, writeSync, closeSync } = await import('node:fs');
+  const { tmpdir } = await import('node:os');
+  const { join } = await import('node:path');
+  const { pathToFileURL } = await import('node:url');
+  const dir = mkdtempSync(join(tmpdir(), 'similis-bench-large-'));
+  try {
+    const csv = join(dir, 'loop-huge.csv');
+    const fd = openSync(csv, 'w');
+    writeSync(fd, '# invented water-loop log for the bench (Blasius-like dp, not measured)\n# D = 0.5 in\n# L = 1.2 m\n# rho = 998.21 kg/m^3\n# mu = 1.0016 mPa*s\nQ [L/min],dp [kPa],T [degC]\n');
+    let text = '';
+    for (let i = 0; i < rows; i++) {
+      const q = 2 + (i % 10007) * 0.002;
+      text += `${q.toFixed(4)},${(0.0105 * q ** 1.75 * (1 + 0.01 * ((i % 13) - 6) / 6)).toFixed(6)},${(20 + (i % 50) * 0.1).toFixed(1)}\n`;
+      if (text.length > 1 << 22) {
+        writeSync(fd, text);
+        text = '';
+      }
+    }
+    writeSync(fd, text);
+    closeSync(fd);
+    writeFileSync(join(dir, 'study.yaml'), 'title: bench, invented data\nderived:\n  U: 4*Q/(pi*D^2)\ngroups:\n  Re: rho*U*D/mu\n  f: dp*D/(L*0.5*rho*U^2)\nfit:\n  response: f\n  model: C*Re^a\n  parameters: { C: 0.3, a: -0.25 }\n');
+    const hook = join(dir, 'rss-hook.mjs');
+    writeFileSync(hook, "process.on('exit', () => { const u = process.resourceUsage(); process.stderr.write(`bench-rss-kb=${u.maxRSS}\\n`); });\n");
+    row('input', `${(statSync(csv).size / 1e6).toFixed(0)} MB`);
+    const runChild = (args) => {
+      const t0 = performance.now();
+      const out = spawnSync(process.execPath, ['--import', pathToFileURL(hook).href, cli, ...args], { cwd: dir, encoding: 'utf8', maxBuffer: 1 << 26 });
+      const ms = performance.now() - t0;
+      const failure = out.status === 0 ? undefined : `exit ${out.status ?? out.signal}: ${out.stderr.split('\n').find((l) => l.startsWith('similis: error') || l.includes('FATAL')) ?? out.stderr.slice(-300)}`;
+      return { ms, rss: Number(/bench-rss-kb=(\d+)/.exec(out.stderr)?.[1] ?? NaN) / 1024, failure };
+    };
+    const red = runChild(['reduce', 'loop-huge.csv', '--study', 'study.yaml', '-o', 'reduced.csv']);
+    row('reduce -o: wall time', `${(red.ms / 1000).toFixed(1)} s`, `${(rows / (red.ms / 1000) / 1e6).toFixed(2)} M rows/s`);
+    row('reduce -o: peak resident memory', `${red.rss.toFixed(0)} MB`, `output ${(statSync(join(dir, 'reduced.csv')).size / 1e6).toFixed(0)} MB`);
+    rmSync(join(dir, 'reduced.csv'), { force: true });
+    if (red.failure !== undefined) row('reduce -o: FAILED', red.failure);
+    const fit = runChild(['fit', 'loop-huge.csv', '--study', 'study.yaml', '--out', 'rep/huge']);
+    row('fit --out: wall time', `${(fit.ms / 1000).toFixed(1)} s`);
+    row('fit --out: peak resident memory', `${fit.rss.toFixed(0)} MB`, `${(fit.rss / rows * 1e6).toFixed(0)} bytes a row`);
+    if (fit.failure !== undefined) row('fit --out: FAILED', fit.failure);
+    else for (const ext of ['json', 'csv', 'html']) row(`fit --out: huge.${ext}`, `${(statSync(join(dir, `rep/huge.${ext}`)).size / 1e6).toFixed(1)} MB`);
+    return { reduceRss: red.rss, fitRss: fit.rss };
+  } finally {
+    rmSync(dir, { recursive: true, force: true });
+  }
+}
+
+/**
+ * `node bench/run.mjs [section...]` runs only the sections named (startup, formula, ...); none: all
+ * but the opt-in ones (large).
+ */
 const only = new Set(process.argv.slice(2));
 const sections = { startup: benchStartup, formula: benchFormula, correlations: benchCorrelations, fit: benchFit, reduce: benchReduce, report: benchReport, batch: benchBatch };
+const optIn = { large: benchLarge };
 for (const [name, run] of Object.entries(sections)) if (only.size === 0 || only.has(name)) await run();
+for (const [name, run] of Object.entries(optIn)) if (only.has(name)) await run();
 process.stdout.write('\n');

@@ -71,7 +71,7 @@ export function buildReportModel(input: ReportInput): ReportModel {
     goodness: goodness(fit),
     curves: [...fitCurves(input, groups, mainGroup), ...handbook(input, groups, mainGroup)],
     points,
-    normalQuantiles: normalQuantiles(points),
+    normalQuantiles: normalQuantiles(points, fit.points.studentized),
     excluded: input.excluded.map((e) => ({ source: `${e.file}:${e.line}`, reason: e.reason })),
     warnings: input.warnings.map((w) => ({ code: w.code, message: w.message })),
     comparisons: input.comparisons,
@@ -138,38 +138,91 @@ function flaggedRows(fit: FitResult): Set<number> {
   return rows;
 }
 
+
+/**
+ * One point of the report, read from the fit's typed arrays when asked: an object of three
+ * fields instead of a label string, a group record and seven numbers per point, so that a fit of
+ * millions of rows stays within memory (the plots show at most MAX_PLOTTED_POINTS of them;
+ * measured with bench/run.mjs large).
+ */
+class LazyPoint implements ReportPoint {
+  constructor(
+    private readonly at: PointTable,
+    private readonly i: number,
+    readonly flags: readonly string[],
+  ) {}
+  get source(): string {
+    return label(this.at.input.rowSource, this.i);
+  }
+  get measured(): number {
+    return this.at.input.fit.points.y[this.i]!;
+  }
+  get fitted(): number {
+    return this.at.input.fit.points.fitted[this.i]!;
+  }
+  get relDeviation(): number {
+    return (this.measured - this.fitted) / this.fitted;
+  }
+  get studentized(): number | null {
+    return finiteOrNull(this.at.input.fit.points.studentized[this.i]);
+  }
+  get leverage(): number | null {
+    return finiteOrNull(this.at.input.fit.points.leverage[this.i]);
+  }
+  get cooksDistance(): number | null {
+    return finiteOrNull(this.at.input.fit.points.cooksDistance[this.i]);
+  }
+  get groups(): Readonly<Record<string, number>> {
+    const values: Record<string, number> = Object.create(null) as Record<string, number>;
+    for (const g of this.at.groupNames) values[g] = this.at.input.columns.get(g)?.[this.i] ?? NaN;
+    return values;
+  }
+}
+
+/** What every LazyPoint of one report reads from. */
+interface PointTable {
+  readonly input: ReportInput;
+  readonly groupNames: readonly string[];
+}
+
 function reportPoints(input: ReportInput, groups: readonly ReportGroup[]): ReportPoint[] {
   const pts = input.fit.points;
   const flagged = flaggedRows(input.fit);
-  const out: ReportPoint[] = [];
-  for (let i = 0; i < pts.y.length; i++) {
-    const measured = pts.y[i]!;
-    const fitted = pts.fitted[i]!;
-    const values: Record<string, number> = Object.create(null) as Record<string, number>;
-    for (const g of groups) values[g.name] = input.columns.get(g.name)?.[i] ?? NaN;
-    out.push({
-      source: label(input.rowSource, i),
-      measured,
-      fitted,
-      relDeviation: (measured - fitted) / fitted,
-      studentized: finiteOrNull(pts.studentized[i]),
-      leverage: finiteOrNull(pts.leverage[i]),
-      cooksDistance: finiteOrNull(pts.cooksDistance[i]),
-      flags: flagged.has(i) ? flagWords(pts.flags[i]!) : [],
-      groups: values,
-    });
-  }
+  const table: PointTable = { input, groupNames: groups.map((g) => g.name) };
+  const out: ReportPoint[] = new Array<ReportPoint>(pts.y.length);
+  for (let i = 0; i < pts.y.length; i++) out[i] = new LazyPoint(table, i, flagged.has(i) ? flagWords(pts.flags[i]!) : NO_FLAGS);
   return out;
 }
 
+/** The flags of a point the report does not flag (shared: one empty list, not one per point). */
+const NO_FLAGS: readonly string[] = Object.freeze([]);
+
+/** One row of the normal-quantile plot, computed when read (see LazyPoint). */
+class QuantileRow {
+  constructor(
+    private readonly k: number,
+    private readonly n: number,
+    private readonly point: ReportPoint,
+  ) {}
+  get theoretical(): number {
+    return normalQuantile((this.k + 1 - 0.375) / (this.n + 0.25));
+  }
+  get sample(): number {
+    return this.point.studentized!;
+  }
+  get source(): string {
+    return this.point.source;
+  }
+}
+
 /** Normal quantiles at Blom's plotting positions (i - 3/8)/(n + 1/4) (Blom 1958, Statistical Estimates and Transformed Beta-Variables). */
-function normalQuantiles(points: readonly ReportPoint[]): ReportModel['normalQuantiles'] {
-  const rows = points
-    .map((p) => ({ sample: p.studentized ?? NaN, source: p.source }))
-    .filter((r) => Number.isFinite(r.sample))
-    .sort((a, b) => a.sample - b.sample);
-  const n = rows.length;
-  return rows.map((r, i) => ({ theoretical: normalQuantile((i + 1 - 0.375) / (n + 0.25)), sample: r.sample, source: r.source }));
+function normalQuantiles(points: readonly ReportPoint[], studentized: Float64Array): ReportModel['normalQuantiles'] {
+  let n = 0;
+  for (let i = 0; i < studentized.length; i++) if (Number.isFinite(studentized[i]!)) n++;
+  const order = new Int32Array(n);
+  for (let i = 0, k = 0; i < studentized.length; i++) if (Number.isFinite(studentized[i]!)) order[k++] = i;
+  order.sort((a, b) => studentized[a]! - studentized[b]! || a - b);
+  return Array.from(order, (i, k) => new QuantileRow(k, n, points[i]!));
 }
 
 function grid(g: ReportGroup): Float64Array {

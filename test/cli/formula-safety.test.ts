@@ -26,7 +26,7 @@ const PAYLOADS: readonly { name: string; text: string; says?: RegExp }[] = [
   { name: 'this', text: 'this' },
   { name: 'template string', text: '`${process.exit(7)}`' },
   { name: 'backticks', text: '`Re`' },
-  { name: "require('fs')", text: "require('fs').readFileSync('/etc/passwd')" },
+  { name: "require('fs')", text: "require('fs').readFileSync('secrets.txt')" },
   { name: 'globalThis assignment', text: 'globalThis.__pwned = 1' },
   { name: 'arrow function', text: '(() => process.exit(3))()' },
   { name: '1 MB of formula', text: 'Re+'.repeat(349_525) + 'Re', says: /limit|longer than|at most|10000|bytes long/ },
