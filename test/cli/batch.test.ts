@@ -92,6 +92,13 @@ describe('similis batch', () => {
     expect(html).toMatch(/runs\/broken\.csv<\/th><td>runs\/broken\.csv<\/td><td class="num">8<\/td>/);
   });
 
+  it('a campaign whose every file fails: the index lists them, no empty files/ folder is left, exit code 2', async () => {
+    const r = await runInCamp('batch', 'runs/broken.csv', '--study', 'study.yaml', '--out', 'out/c0', '--quiet');
+    expect(r.code).toBe(2);
+    expect(r.err).toContain('1 of 1 files failed');
+    expect(readdirSync(folder.path('camp/out/c0')).sort()).toEqual(['index.html', 'index.json']);
+  });
+
   it('derives safe report names from hostile input names, inside the campaign folder, and escapes them in the index', async () => {
     const r = await runInCamp('batch', 'runs/tube 1.csv', `runs/${HOSTILE}`, '../x.csv', '--study', 'study.yaml', '--out', 'out/c2', '--quiet');
     expect(r.code).toBe(0);

@@ -1,4 +1,5 @@
 import { availableParallelism } from 'node:os';
+import { rmdir } from 'node:fs/promises';
 import { join, resolve } from 'node:path';
 import { InputError, WarningList } from '../../common/errors.js';
 import { whereFlag } from '../../data/index.js';
@@ -93,6 +94,9 @@ export async function runBatch(ctx: CommandContext, inputs: readonly string[], o
   } finally {
     await pool.close();
     progress.done();
+    // No file report written (every file failed): no empty files/ folder left behind (rmdir
+    // removes only an empty folder).
+    await rmdir(join(outDir, 'files')).catch(() => undefined);
   }
   const text = summaryText(index, outLabel);
   const failed = index.files.filter((f) => f.failure !== null);
