@@ -62,6 +62,14 @@ export interface LmOutcome {
 }
 
 /**
+ * Scaled gradient (largest |cosine| between the residuals and a Jacobian column) above which a
+ * met reduction or step test is reported as 'stalled': at a least-squares minimum it is 0 (the
+ * residuals are orthogonal to the columns), whatever the noise. Common practice, no source: far
+ * above the rounding level of the cosines and far below a direction the fit still could follow.
+ */
+const STALLED_GRADIENT = 1e-2;
+
+/**
  * Runs Levenberg-Marquardt from `start`.
  * @param sqrtWeights square roots of the row weights, or undefined for unit weights.
  * @returns the best point found, with its status. It never throws for a failed fit: non-finite
@@ -71,14 +79,6 @@ export interface LmOutcome {
  * // y = b1*(1 - exp(-b2*x)) (NIST StRD Misra1a) from start (500, 1e-4) converges to
  * // b1 = 238.94212918, b2 = 5.5015643181e-4 (NIST certified values).
  */
-/**
- * Scaled gradient (largest |cosine| between the residuals and a Jacobian column) above which a
- * met reduction or step test is reported as 'stalled': at a least-squares minimum it is 0 (the
- * residuals are orthogonal to the columns), whatever the noise. Common practice, no source: far
- * above the rounding level of the cosines and far below a direction the fit still could follow.
- */
-const STALLED_GRADIENT = 1e-2;
-
 export function levenbergMarquardt(
   model: LmModel,
   y: Float64Array,
