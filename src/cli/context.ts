@@ -19,4 +19,11 @@ export interface CommandContext {
 export interface CommandOutcome {
   readonly text: string;
   readonly json: Record<string, unknown>;
+  /**
+   * The --json document in pieces, for a document too large for one string (fit: every point of
+   * millions of rows). The runner calls it with `finish`, which takes the document without its
+   * bulk, checks it for values that are not finite and returns it with `warnings` added; `json`
+   * is then not read.
+   */
+  readonly jsonPieces?: (finish: (doc: Record<string, unknown>) => Record<string, unknown>) => Iterable<string>;
 }

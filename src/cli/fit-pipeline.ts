@@ -242,7 +242,7 @@ export async function renderFitFiles(run: FitRun, meta: ReportMeta): Promise<{ j
  * rows never builds one object or one string per point for the whole file (a JavaScript string
  * holds at most about 500 million characters).
  */
-function* jsonText(run: FitRun, doc: Record<string, unknown>): Generator<string> {
+export function* jsonText(run: FitRun, doc: Record<string, unknown>): Generator<string> {
   const text = JSON.stringify(doc, jsonReplacer, 2) + '\n';
   const [head, tail] = text.split(JSON.stringify(POINTS_STREAMED)) as [string, string];
   yield head;

@@ -4,6 +4,11 @@
  */
 export interface CliIo {
   readonly stdout: (text: string) => void;
+  /**
+   * Writes to stdout and resolves when the stream can take more (backpressure), for output
+   * written in many pieces (a large --json document); without it, pieces go to `stdout`.
+   */
+  readonly stdoutFlowing?: (text: string) => Promise<void>;
   readonly stderr: (text: string) => void;
   /** Whether stderr is a terminal (progress bars and colour only then). */
   readonly stderrIsTTY: boolean;
@@ -28,6 +33,7 @@ export type ExitCode = (typeof EXIT)[keyof typeof EXIT];
 export function processIo(): CliIo {
   return {
     stdout: (t) => process.stdout.write(t),
+    stdoutFlowing: (t) => (process.stdout.write(t) ? Promise.resolve() : new Promise((done) => process.stdout.once('drain', () => done()))),
     stderr: (t) => process.stderr.write(t),
     stderrIsTTY: process.stderr.isTTY === true,
     cwd: process.cwd(),

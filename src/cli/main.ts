@@ -40,5 +40,12 @@ async function runNormally(): Promise<void> {
       process.exit(code);
     });
   }
+  // The reader of stdout went away (`similis fit --json | head`): stop quietly, as Unix tools
+  // do (common practice), after removing unfinished outputs; other stdout errors are ours.
+  process.stdout.on('error', (e: NodeJS.ErrnoException) => {
+    if (e.code !== 'EPIPE') throw e;
+    removeOpenTempFiles();
+    process.exit(process.exitCode ?? 0);
+  });
   process.exitCode = await runCli(argv, processIo());
 }

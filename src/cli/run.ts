@@ -47,6 +47,20 @@ export async function runCli(argv: readonly string[], io: CliIo): Promise<ExitCo
     // A bare `similis` prints help (commander handles it); nothing else ends here.
     return EXIT.ok;
   }
+  if (context.json && outcome.jsonPieces !== undefined) {
+    const ctx = context;
+    const finish = (doc: Record<string, unknown>): Record<string, unknown> => {
+      const w = notFiniteWarning(doc, 'the JSON output');
+      if (w !== undefined) ctx.warnings.warn(w);
+      return { ...doc, warnings: ctx.warnings.items.map(warningJson) };
+    };
+    for (const piece of outcome.jsonPieces(finish)) {
+      if (io.stdoutFlowing === undefined) io.stdout(piece);
+      else await io.stdoutFlowing(piece);
+    }
+    for (const w of ctx.warnings.items) io.stderr(renderWarning(w));
+    return strict && ctx.warnings.items.length > 0 ? EXIT.warningsAsErrors : EXIT.ok;
+  }
   // Read once: a command may build its JSON document only when asked (a getter).
   const doc = context.json ? outcome.json : undefined;
   if (doc !== undefined) {

@@ -52,6 +52,16 @@ describe('similis fit', () => {
     expect(readdirSync(folder.path('reports')).sort()).toEqual(['tube-a.csv', 'tube-a.html', 'tube-a.json']);
   });
 
+  it('--json printed in pieces is one standard JSON document (2-space indent, as JSON.stringify writes it) with the points of NAME.json', async () => {
+    const r = await folder.run('fit', '--study', 'study.yaml', '--json', '--out', 'reports/pieces');
+    expect(r.code).toBe(0);
+    const doc = JSON.parse(r.out);
+    expect(r.out).toBe(JSON.stringify(doc, null, 2) + '\n');
+    const file = JSON.parse(readFileSync(folder.path('reports/pieces.json'), 'utf8'));
+    expect(doc.points).toEqual(file.points);
+    expect(doc.fit).toEqual(file.fit);
+  });
+
   it('the nonlinear method finds the same law in linear space', async () => {
     const r = await folder.run('fit', '--study', 'study.yaml', '--method', 'nonlinear', '--json');
     expect(r.code).toBe(0);

@@ -2,7 +2,7 @@ import { InputError } from '../../common/errors.js';
 import { whereFlag } from '../../data/index.js';
 import type { FitOverrides } from '../../fit/from-study.js';
 import type { CommandContext, CommandOutcome } from '../context.js';
-import { commitTogether, fitJson, fitPooled, outputBase, reduceInputs, renderFitFiles, type FitRun } from '../fit-pipeline.js';
+import { commitTogether, fitJson, fitPooled, jsonText, outputBase, reduceInputs, renderFitFiles, type FitRun } from '../fit-pipeline.js';
 import { formatNumber, formatTable } from '../format.js';
 import { readInputText, resolveInputs } from '../reduce-inputs.js';
 import { delimiterOption, studyFor, type StudyOptions } from '../study-input.js';
@@ -47,12 +47,14 @@ export async function runFit(ctx: CommandContext, inputs: readonly string[], opt
     await commitTogether(targets);
     written = targets.map((t) => t.label);
   }
-  // The JSON document (every point) is built only when --json asks for it.
+  // The JSON document (every point) is built only when asked for; --json prints it in pieces, a
+  // block of points at a time, so that millions of rows never make one string.
   return {
     text: summaryText(run, written),
     get json() {
       return fitJson(run);
     },
+    jsonPieces: (finish) => jsonText(run, finish(fitJson(run, false))),
   };
 }
 
