@@ -36,6 +36,8 @@ export const dataMessages = {
   noHeader: (lines: number) =>
     lines === 0 ? 'the file is empty: expected a header row of cells such as Q [L/min],dp [kPa]' : `no header row: the file has ${lines} lines, all blank or starting with #; expected a header row of cells such as Q [L/min],dp [kPa]`,
   noRows: (headerLine: number) => `the header (line ${headerLine}) is followed by no data rows: expected at least one row of values under it`,
+  constantWithoutValue: (name: string) =>
+    `'# ${name} =' has no value: it is kept as a comment, and ${name} is not set by this file; write the value and its unit (e.g. '# ${name} = 1.5 um'), or remove the line`,
   lateConstant: (headerLine: number) =>
     `this line looks like a constant or uncertainty but comes after the header (line ${headerLine}): it is kept as a comment; move it above the header to use it`,
 

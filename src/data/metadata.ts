@@ -2,6 +2,7 @@ import { InputError, relocatingSink, type SourceSpan, type WarningSink } from '.
 import { checkUserName, type FunctionTable } from '../expr/index.js';
 import { PROPERTY_FUNCTIONS } from '../properties/index.js';
 import { DATA_ERROR } from './kinds.js';
+import { dataMessages } from './messages.js';
 import { parseQuantityText } from './quantity-text.js';
 import type { FileComment, FileConstant } from './table.js';
 
@@ -76,6 +77,11 @@ export function parseMetaLine(lineText: string, line: number, file: string, sink
       where: at(nameColumn, nameColumn + name.length),
     };
     return { kind: 'constant', constant };
+  }
+  // '# eps =' with nothing after it: a constant someone forgot to fill in, said rather than
+  // silently kept as a comment.
+  if (a !== null && lineText.slice(a[0].length).trim() === '') {
+    sink?.warn({ code: 'csv-constant-without-value', message: dataMessages.constantWithoutValue(a[1]!), where: at(1, lineText.length + 1) });
   }
   return { kind: 'comment', comment: { line, text: lineText.replace(/^#+/, '').trim() } };
 }

@@ -129,6 +129,15 @@ describe('parseRigText: missing values, comments, uncertainties', () => {
     expect(u.get('T')!.absoluteSI).toBeCloseTo(0.1, 15);
     expect(u.get('D')!.absoluteSI).toBeCloseTo(1e-5, 20);
   });
+  it("a '# name =' line with no value is kept as a comment and said (csv-constant-without-value, with its line)", () => {
+    const { table, warnings } = read('# eps =\n# note: rig 2\nQ [L/min],dp [kPa]\n1,2\n');
+    expect(table.head.constants.map((c) => c.name)).toEqual([]);
+    const w = warnings.items.filter((x) => x.code === 'csv-constant-without-value');
+    expect(w).toHaveLength(1);
+    expect(w[0]!.where).toMatchObject({ file: 'rig.csv', line: 1 });
+    expect(w[0]!.message).toContain("'# eps ='");
+  });
+
   it('a unit warning from a # line names the file, the line and the column of the unit (not column 1 of nowhere)', () => {
     const lines = ['# rig 2', '# u(dp) = 0.25 % + 0.01 inH2O', '# h0 = 2 inH2O', 'Q [L/min],dp [inH2O]', '1,2'];
     const { warnings } = read(lines.join('\n') + '\n');
