@@ -1,15 +1,8 @@
+import { PLUS, MINUS, DOT, ZERO, NINE, LOWER_E, UPPER_E } from './char-codes.js';
 /**
  * Reading numbers and text straight from UTF-8 bytes, for the reader's fast path: a row of plain
  * numbers is read without decoding the line into a string at all.
  */
-
-const PLUS = 43;
-const MINUS = 45;
-const DOT = 46;
-const ZERO = 48;
-const NINE = 57;
-const LOWER_E = 101;
-const UPPER_E = 69;
 
 /** Exact powers of ten: every 10^k with k <= 22 is a double exactly (5^22 < 2^53). */
 const POW10 = Float64Array.from({ length: 23 }, (_, k) => Number(`1e${k}`));

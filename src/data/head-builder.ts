@@ -8,8 +8,7 @@ import { dataMessages } from './messages.js';
 import { parseMetaLine, type UncertaintyLine } from './metadata.js';
 import type { Delimiter, FileComment, FileConstant, RigHead } from './table.js';
 import { checkRelativeTemperature, checkUncertaintyDimension, parseUncertainty } from './uncertainty.js';
-
-const HASH = 35;
+import { HASH } from './char-codes.js';
 
 /**
  * The lines of a rig file before its first data row: `#` lines (constants, uncertainties,

@@ -1,6 +1,7 @@
 import { parseUnit } from '../units/index.js';
 import { DATA_ERROR } from './kinds.js';
 import { dataMessages } from './messages.js';
+import { SPACE, TAB, PLUS, MINUS, DOT, ZERO, NINE, LOWER_E, UPPER_E } from './char-codes.js';
 
 /**
  * Numbers in rig files: a plain decimal with an optional exponent, nothing else. `Number()` alone
@@ -12,16 +13,6 @@ import { dataMessages } from './messages.js';
  * The check is a hand-written scan over char codes (no regular expression): it runs for every
  * cell of every row.
  */
-
-const SPACE = 32;
-const TAB = 9;
-const PLUS = 43;
-const MINUS = 45;
-const DOT = 46;
-const ZERO = 48;
-const NINE = 57;
-const LOWER_E = 101;
-const UPPER_E = 69;
 
 /**
  * The value of a cell written as a plain decimal number, or NaN when the cell is anything else

@@ -9,6 +9,7 @@ import { asciiText } from './byte-scan.js';
 import { parseQuotedRecords, QuoteGatherer, type QuotedRecord } from './quoted-records.js';
 import { RowStore } from './row-store.js';
 import type { Delimiter, FileComment, RigHead, RigTable } from './table.js';
+import { HASH } from './char-codes.js';
 
 /**
  * The rig file reader, fed UTF-8 bytes (or text) in pieces of any size, so that a file of a
@@ -56,7 +57,6 @@ export interface ReadOptions {
 }
 
 const QUOTED_BATCH = 256;
-const HASH = 35;
 const QUOTE = '"';
 
 /**

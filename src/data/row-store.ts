@@ -92,6 +92,11 @@ export class RowStore {
       const text = asciiText(bytes, a, b);
       if (this.isRagged(text.split(this.head.delimiter))) throw this.raggedError(text, line);
     }
+    this.endRow(slot, row, line);
+  }
+
+  /** Records the line of the row just stored in `slot` and reports progress. */
+  private endRow(slot: number, row: number, line: number): void {
     this.lineBlock[slot] = line;
     this.slot = slot + 1;
     this.rows = row + 1;
@@ -126,13 +131,7 @@ export class RowStore {
       if (b.state === 'number' && v - v === 0) b.block[slot] = v;
       else b.addCell(cell, row, slot, line, () => this.cellSpan(text, line, j));
     }
-    this.lineBlock[slot] = line;
-    this.slot = slot + 1;
-    this.rows = row + 1;
-    if (this.rows === this.nextProgress) {
-      this.nextProgress += this.progressEvery;
-      this.onProgress?.(this.rows);
-    }
+    this.endRow(slot, row, line);
   }
 
   private checkWidth(cells: string[], line: number, text: string): void {
