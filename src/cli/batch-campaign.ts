@@ -1,10 +1,9 @@
-import { arch, platform } from 'node:os';
 import { WarningList, type Warning } from '../common/errors.js';
 import type { Study } from '../data/index.js';
 import { adjustHeld, fileAgreement, PREDICT_WARNING, predictMessages, userIntervals, type Agreement, type UserInterval } from '../predict/index.js';
 import type { FileFailure, FileResult } from './batch-job.js';
 import type { PooledSummary } from './batch-pooled.js';
-import { VERSION } from './program.js';
+import { runStamp, type RunStamp } from './run-stamp.js';
 
 /**
  * The campaign as a whole, in the main thread: each file's own fit compared with the pooled one
@@ -62,7 +61,7 @@ export interface CampaignIndex {
   readonly files: readonly IndexFile[];
   readonly counts: { readonly files: number; readonly fitted: number; readonly failed: number; readonly disagree: number; readonly rowsRead: number; readonly rowsUsed: number };
   readonly agreementTest: string;
-  readonly provenance: { readonly tool: string; readonly date: string; readonly platform: string; readonly command: string; readonly study: string | null };
+  readonly provenance: RunStamp & { readonly study: string | null };
   readonly cautions: readonly string[];
 }
 
@@ -157,13 +156,7 @@ export function campaignIndex(
       rowsUsed: files.reduce((s, f) => s + f.rowsUsed, 0),
     },
     agreementTest: AGREEMENT_TEST,
-    provenance: {
-      tool: `similis ${VERSION}`,
-      date: new Date().toISOString().replace(/\.\d+Z$/, 'Z'),
-      platform: `${platform()} ${arch()}, Node ${process.version}`,
-      command: ['similis', ...meta.argv].map((a) => (/^[\w./=:-]+$/.test(a) ? a : JSON.stringify(a))).join(' '),
-      study: meta.studyLabel,
-    },
+    provenance: { ...runStamp(meta.argv), study: meta.studyLabel },
     cautions: CAMPAIGN_CAUTIONS,
   };
 }

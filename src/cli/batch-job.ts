@@ -11,7 +11,7 @@ import { parseUnit } from '../units/index.js';
 import type { CommandContext } from './context.js';
 import { commitTogether, fileRecipeInfo, fitPooled, recipeSourcesOf, reduceInputs, renderFitFiles, type FileRecipeInfo, type PooledInputs } from './fit-pipeline.js';
 import { insideFolder } from './batch-inputs.js';
-import type { CliIo } from './io.js';
+import { memoryIo } from './io.js';
 import type { InputFile } from './reduce-inputs.js';
 import { delimiterOption, studyFor } from './study-input.js';
 
@@ -95,11 +95,6 @@ export interface FileResult {
   readonly seconds: number;
 }
 
-/** A CliIo that keeps nothing: a job's messages become warnings in its result. */
-function silentIo(cwd: string): CliIo {
-  return { stdout: () => undefined, stderr: () => undefined, stderrIsTTY: false, cwd };
-}
-
 /** A campaign's study as each thread loads it. */
 export interface LoadedStudy {
   readonly study: Study;
@@ -109,7 +104,7 @@ export interface LoadedStudy {
 
 /** The study of a campaign, loaded once per thread. */
 export async function loadCampaignStudy(setup: BatchSetup, warnings: WarningList): Promise<LoadedStudy> {
-  const ctx: CommandContext = { io: silentIo(setup.cwd), json: false, warnings, argv: setup.argv };
+  const ctx: CommandContext = { io: memoryIo(setup.cwd), json: false, warnings, argv: setup.argv };
   const opts = { ...(setup.study === undefined ? {} : { study: setup.study }), const: setup.const, derive: setup.derive, group: setup.group };
   const { study, studyPath } = await studyFor(ctx, opts);
   return { study, studyPath, studyText: studyPath === null ? null : await readFile(studyPath, 'utf8') };
@@ -125,7 +120,7 @@ export type ReducedResult = Omit<FileResult, 'fit' | 'written'>;
 export async function reduceFileJob(setup: BatchSetup, loaded: LoadedStudy, job: FileJob): Promise<ReducedResult> {
   const started = performance.now();
   const warnings = new WarningList();
-  const ctx: CommandContext = { io: silentIo(setup.cwd), json: false, warnings, argv: setup.argv };
+  const ctx: CommandContext = { io: memoryIo(setup.cwd), json: false, warnings, argv: setup.argv };
   const base = { index: job.index, label: job.file.label, outName: job.outName };
   const seconds = () => (performance.now() - started) / 1000;
   try {

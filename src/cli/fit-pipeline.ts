@@ -1,7 +1,6 @@
 import { createHash } from 'node:crypto';
 import { readFile } from 'node:fs/promises';
 import { dirname, resolve } from 'node:path';
-import { arch, platform } from 'node:os';
 import type { WarningSink } from '../common/errors.js';
 import { InputError, type Warning } from '../common/errors.js';
 import { notFiniteWarning } from '../common/not-finite.js';
@@ -18,7 +17,7 @@ import { buildReportModel } from '../report/build-model.js';
 import { renderReportHtml, type ReportComparison } from '../report/index.js';
 import type { CommandContext } from './context.js';
 import { warnExclusions } from './exclusions.js';
-import { VERSION } from './program.js';
+import { runStamp } from './run-stamp.js';
 import { fileChunks, reduceFile, type InputFile } from './reduce-inputs.js';
 import { jsonReplacer } from './run.js';
 import { vegaRuntime } from './vega-runtime.js';
@@ -226,10 +225,7 @@ export async function renderFitFiles(run: FitRun, meta: ReportMeta): Promise<{ j
       return { name: f.label, sha256: hashes[i]!, rows: stats?.rowsRead ?? 0, used: stats?.rowsKept ?? 0 };
     }),
     study: meta.studyText,
-    tool: `similis ${VERSION}`,
-    date: new Date().toISOString().replace(/\.\d+Z$/, 'Z'),
-    platform: `${platform()} ${arch()}, Node ${process.version}`,
-    command: ['similis', ...meta.argv].map((a) => (/^[\w./=:-]+$/.test(a) ? a : JSON.stringify(a))).join(' '),
+    ...runStamp(meta.argv),
   });
   const json = jsonText(run, { ...body, warnings: warnings.map((w) => ({ code: w.code, message: w.message })) });
   const options = meta.interactive === true ? { interactiveRuntime: await vegaRuntime() } : {};
