@@ -22,6 +22,7 @@ import { fileChunks, reduceFile, type InputFile } from './reduce-inputs.js';
 import { jsonReplacer } from './run.js';
 import { vegaRuntime } from './vega-runtime.js';
 import { AtomicFile, makeOutputFolder } from './write-atomic.js';
+import { finiteMedian } from '../common/median.js';
 
 /**
  * The steps of a fit, shared by `similis fit` (all files pooled) and `similis batch` (each file on
@@ -314,7 +315,7 @@ function handbookCurves(run: FitRun, grid: Float64Array, held: ReadonlyMap<strin
         if (typeof arg === 'number') return arg;
         const name = typeof arg === 'string' ? arg : input.name;
         if (name === mainName) return grid[i]!;
-        return held.get(name) ?? medianOf(run.pooled.columns.get(name));
+        return held.get(name) ?? finiteMedian(run.pooled.columns.get(name) ?? []);
       });
       y[i] = c.value(x);
     }
@@ -323,15 +324,7 @@ function handbookCurves(run: FitRun, grid: Float64Array, held: ReadonlyMap<strin
   return curves;
 }
 
-function medianOf(values: Float64Array | undefined): number {
-  if (values === undefined) return NaN;
-  const v = [...values].filter(Number.isFinite).sort((a, b) => a - b);
-  const m = v.length >> 1;
-  return v.length === 0 ? NaN : v.length % 2 ? v[m]! : (v[m - 1]! + v[m]!) / 2;
-}
-
-/** One row per point: file, line, the groups, response, fitted value, residuals, flags. */
-/** NAME.csv as pieces of POINT_BLOCK lines (see jsonText). */
+/** NAME.csv as pieces of POINT_BLOCK lines (see jsonText): one row per point: file, line, the groups, response, fitted value, residuals, flags. */
 function* pointsCsv(run: FitRun): Generator<string> {
   const { fit, pooled, groups } = run;
   const head = ['file', 'line', ...groups, fit.response, 'fitted', 'residual', 'relative_deviation', 'studentized', 'leverage', 'cooks_distance', 'flags'];

@@ -4,6 +4,7 @@ import type { RawNode } from '../data/index.js';
 import { compareWithCorrelation, type Comparison } from './compare.js';
 import { parseCompareEntry, type CompareRequest } from './compare-spec.js';
 import { checkExponent } from './exponent.js';
+import { finiteMedian } from '../common/median.js';
 
 /**
  * The study's `compare:` list applied to fitted data: each handbook correlation evaluated at every
@@ -113,7 +114,7 @@ function exponentSentences(
     for (const input of c.inputs) {
       const v = args.get(input.name) ?? data.columns.get(input.name);
       if (v === undefined) continue;
-      point[input.name] = typeof v === 'number' ? v : median(v);
+      point[input.name] = typeof v === 'number' ? v : finiteMedian(v);
     }
     try {
       const check = checkExponent({ name: e.name, estimate: e.estimate, interval: e.interval, levelPercent: 95 }, c, point);
@@ -122,11 +123,4 @@ function exponentSentences(
       if (!(err instanceof InputError)) throw err;
     }
   }
-}
-
-function median(values: Float64Array): number {
-  const v = [...values].filter(Number.isFinite).sort((a, b) => a - b);
-  if (v.length === 0) return NaN;
-  const m = v.length >> 1;
-  return v.length % 2 ? v[m]! : (v[m - 1]! + v[m]!) / 2;
 }

@@ -8,6 +8,7 @@ import { PROPERTY_FUNCTIONS } from '../properties/index.js';
 import { fitSpaceOf } from './fit-space.js';
 import { PREDICTION_CAUTIONS } from './messages.js';
 import type { PredictionRecipe, RecipeInput, RecipeStep, RecipeWeights } from './types.js';
+import { finiteMedian } from '../common/median.js';
 
 /** What the data side adds: how the groups are computed from measured quantities. */
 export interface RecipeSources {
@@ -33,7 +34,7 @@ export function predictionRecipe(fit: FitResult, sources: RecipeSources): Predic
   const weights: RecipeWeights = {
     kind,
     ...(sources.weights?.formula === undefined ? {} : { formula: sources.weights.formula }),
-    medianWeight: kind === 'none' ? 1 : median(fit.points.weight),
+    medianWeight: kind === 'none' ? 1 : medianWeightOf(fit.points.weight),
   };
   return {
     response: fit.response,
@@ -54,9 +55,8 @@ export function predictionRecipe(fit: FitResult, sources: RecipeSources): Predic
   };
 }
 
-function median(values: Float64Array): number {
-  const v = [...values].filter(Number.isFinite).sort((a, b) => a - b);
-  if (v.length === 0) return 1;
-  const k = v.length >> 1;
-  return v.length % 2 === 1 ? v[k]! : (v[k - 1]! + v[k]!) / 2;
+/** The median weight of the fitted points, 1 when no weight is finite. */
+function medianWeightOf(weights: Float64Array): number {
+  const m = finiteMedian(weights);
+  return Number.isNaN(m) ? 1 : m;
 }

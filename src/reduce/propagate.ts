@@ -9,6 +9,7 @@ import {
   type UncertaintyInputs,
 } from '../uncertainty/index.js';
 import type { OutputPropagation, StatedUncertainty, UncertaintyPlan } from './uncertainty-plan.js';
+import { finiteMedian } from '../common/median.js';
 
 /**
  * The stated uncertainties carried to every kept row of one file: for each output the combined
@@ -119,7 +120,7 @@ export function budgetOf(output: string, first: FirstOrderResult): OutputBudget 
   const over = (f: (i: number) => number) => {
     const out = new Float64Array(count);
     for (let k = 0; k < count; k++) out[k] = f(rows[k]!);
-    return median(out);
+    return finiteMedian(out);
   };
   const inputs = first.budget
     .map((e) => ({
@@ -147,17 +148,4 @@ function monteCarloCheck(
   let largest = NaN;
   for (const d of comparison.relativeDifference) if (Number.isFinite(d) && !(Math.abs(d) <= largest)) largest = Math.abs(d);
   return { output: out.output, samples: request.samples, seed, rows: rows.n, disagreeing: comparison.count, largestRelativeDifference: largest };
-}
-
-/** Median of the finite values (NaN for none); sorts its argument. @example median(Float64Array.of(3, 1, 2)) // => 2 */
-function median(xs: Float64Array): number {
-  xs.sort();
-  let m = xs.length;
-  while (m > 0 && !Number.isFinite(xs[m - 1]!)) m--; // NaN and +Infinity sort last
-  let start = 0;
-  while (start < m && !Number.isFinite(xs[start]!)) start++; // -Infinity first
-  const k = m - start;
-  if (k === 0) return NaN;
-  const mid = start + Math.floor((k - 1) / 2);
-  return k % 2 === 1 ? xs[mid]! : (xs[mid]! + xs[mid + 1]!) / 2;
 }
